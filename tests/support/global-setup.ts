@@ -1,0 +1,17 @@
+// Vitest global setup: gives the API and integration tests a real PostgreSQL on loopback.
+// `npm test` starts the throwaway cluster itself and passes DATABASE_URL; a developer running
+// `npx vitest` directly gets the same throwaway cluster started here.
+import { startCluster } from '../../api/dev/pg-cluster.mjs';
+
+export const testCluster = { name: 'test', port: Number(process.env.COUPLET_TEST_PG_PORT ?? 54339) };
+
+export default async function setup(): Promise<void> {
+  if (process.env.DATABASE_URL || process.env.COUPLET_NO_DB === '1') return;
+  try {
+    const cluster = await startCluster({ ...testCluster, database: 'couplet_test', throwaway: true });
+    process.env.DATABASE_URL = cluster.url;
+  } catch (error) {
+    // Physics tests need no database; the database tests fail on their own with this reason.
+    console.warn(`[tests] no PostgreSQL for this run: ${(error as Error).message}`);
+  }
+}
