@@ -16,8 +16,8 @@ export const COPPER_REFERENCE_TEMPERATURE = 20;
  * Resistivity of annealed copper at a temperature.
  *
  * Method: the linear model rho(T) = rho20 · (1 + alpha · (T − 20 °C)) with rho20 = 1.72e-8 Ω·m and
- * alpha = 0.00393 /K. The linear model is good to about 1 % from −50 °C to 150 °C, which covers coil
- * operation; outside −100 °C … 250 °C it is refused rather than extrapolated.
+ * alpha = 0.00393 /K. The linear model is good to about 1 % from −50 °C to 150 °C, which covers
+ * coil operation; outside −100 °C … 250 °C it is refused rather than extrapolated.
  *
  * References: International Annealed Copper Standard (IACS), US Bureau of Standards Circular 31
  * (1914) — constants quoted `from memory`.
