@@ -1,0 +1,142 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { Component } from '@angular/core';
+import { ComponentFixture, TestBed } from '@angular/core/testing';
+import { Router, provideRouter } from '@angular/router';
+import type { InvitationPreviewResponse } from '../api-types';
+import { AuthSession } from '../auth/auth-session';
+import { AcceptInvitationPage } from './accept-invitation-page';
+
+@Component({ selector: 'app-blank-accept-invitation', template: '' })
+class Blank {}
+
+const token = 'Zq9-x_1token';
+const previewUrl = `/api/v1/invitations/${token}`;
+const preview = (status: InvitationPreviewResponse['status']): InvitationPreviewResponse => ({
+  workspaceName: 'Kestrel Labs — implant charger',
+  email: 'tove@kestrel-labs.example',
+  role: 'reviewer',
+  invitedByName: 'Marta Okafor',
+  expiresAt: '2026-12-09T10:00:00.000Z',
+  status,
+});
+
+describe('AcceptInvitationPage', () => {
+  let fixture: ComponentFixture<AcceptInvitationPage>;
+  let http: HttpTestingController;
+
+  async function settle(): Promise<void> {
+    for (let i = 0; i < 3; i++) {
+      TestBed.tick();
+      await new Promise((resolve) => setTimeout(resolve));
+    }
+  }
+
+  async function render(signedIn: boolean): Promise<void> {
+    TestBed.configureTestingModule({
+      providers: [
+        provideHttpClient(),
+        provideHttpClientTesting(),
+        provideRouter([{ path: '**', component: Blank }]),
+      ],
+    });
+    http = TestBed.inject(HttpTestingController);
+    if (signedIn) {
+      TestBed.inject(AuthSession)
+        .signIn({ email: 'tove@kestrel-labs.example', password: 'x' })
+        .subscribe();
+      http.expectOne('/api/v1/auth/sign-in').flush({
+        user: {
+          id: 'a0000000-0000-4000-8000-000000000005',
+          email: 'tove@kestrel-labs.example',
+          displayName: 'Tove Kestrel',
+          createdAt: '2026-11-30T09:00:00.000Z',
+        },
+        accessToken: 't',
+        expiresAt: new Date(Date.now() + 900_000).toISOString(),
+      });
+    }
+    fixture = TestBed.createComponent(AcceptInvitationPage);
+    fixture.componentRef.setInput('token', token);
+    await settle();
+  }
+
+  const text = (testId: string): string =>
+    (fixture.nativeElement as HTMLElement)
+      .querySelector(`[data-testid=${testId}]`)
+      ?.textContent?.replace(/\s+/g, ' ')
+      .trim() ?? '';
+  const has = (testId: string): boolean =>
+    (fixture.nativeElement as HTMLElement).querySelector(`[data-testid=${testId}]`) !== null;
+
+  afterEach(() => http.verify());
+
+  it('shows workspace, role and inviter, and offers sign-in and sign-up that come back here', async () => {
+    await render(false);
+    expect(has('status-loading')).toBe(true);
+    http.expectOne(previewUrl).flush(preview('pending'));
+    await settle();
+
+    expect(text('invitation-workspace')).toBe('Kestrel Labs — implant charger');
+    expect(text('invitation-role')).toBe('Reviewer');
+    expect(text('invitation-facts')).toContain('Marta Okafor');
+    const signIn = (fixture.nativeElement as HTMLElement).querySelector<HTMLAnchorElement>(
+      '[data-testid=invitation-sign-in]',
+    );
+    const signUp = (fixture.nativeElement as HTMLElement).querySelector<HTMLAnchorElement>(
+      '[data-testid=invitation-sign-up]',
+    );
+    expect(signIn?.getAttribute('href')).toBe(`/sign-in?returnUrl=%2Finvitations%2F${token}`);
+    expect(signUp?.getAttribute('href')).toContain('email=tove@kestrel-labs.example');
+    expect(has('accept-invitation')).toBe(false);
+  });
+
+  it('accepts for a signed-in user and opens the workspace', async () => {
+    await render(true);
+    const navigate = vi.spyOn(TestBed.inject(Router), 'navigate');
+    http.expectOne(previewUrl).flush(preview('pending'));
+    http.expectOne('/api/v1/workspaces').flush({ items: [] });
+    await settle();
+
+    (fixture.nativeElement as HTMLElement)
+      .querySelector<HTMLButtonElement>('[data-testid=accept-invitation]')
+      ?.click();
+    const accept = http.expectOne(`${previewUrl}/accept`);
+    expect(accept.request.method).toBe('POST');
+    accept.flush({
+      workspace: {
+        id: '6f1c2d3e-4b5a-4c6d-8e7f-901a2b3c4d5e',
+        name: 'Kestrel Labs — implant charger',
+        role: 'reviewer',
+        createdAt: '2026-11-30T09:00:00.000Z',
+      },
+    });
+    await settle();
+    http.expectOne('/api/v1/workspaces').flush({ items: [] });
+    expect(navigate).toHaveBeenCalledWith(['/w', '6f1c2d3e-4b5a-4c6d-8e7f-901a2b3c4d5e']);
+  });
+
+  it('says plainly when an invitation was revoked, expired or used, and offers no accept', async () => {
+    for (const status of ['revoked', 'expired', 'accepted'] as const) {
+      TestBed.resetTestingModule();
+      await render(false);
+      http.expectOne(previewUrl).flush(preview(status));
+      await settle();
+      expect(has(`invitation-status-${status}`)).toBe(true);
+      expect(has('accept-invitation')).toBe(false);
+      expect(has('invitation-sign-in')).toBe(false);
+      http.verify();
+    }
+    expect(text('invitation-status-accepted')).toContain('cannot be used again');
+  });
+
+  it('tells an unknown link from a server failure', async () => {
+    await render(false);
+    http
+      .expectOne(previewUrl)
+      .flush({ code: 'not_found', message: 'no' }, { status: 404, statusText: 'Not Found' });
+    await settle();
+    expect(text('status-error')).toContain('This invitation link is not valid');
+    expect(text('status-error')).not.toContain('Try again');
+  });
+});
