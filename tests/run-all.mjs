@@ -107,7 +107,13 @@ async function main() {
       vitestStep(
         'web',
         bin('ng'),
-        ['test', '--watch=false', '--reporters=json', '--reporters=default', `--output-file=${report}`],
+        [
+          'test',
+          '--watch=false',
+          '--reporters=json',
+          '--reporters=default',
+          `--output-file=${report}`,
+        ],
         env,
         report,
       );
@@ -146,7 +152,8 @@ async function main() {
   }
 
   say('summary');
-  for (const r of results) process.stdout.write(`  ${r.name}: ${r.passed} passed, ${r.failed} failed\n`);
+  for (const r of results)
+    process.stdout.write(`  ${r.name}: ${r.passed} passed, ${r.failed} failed\n`);
   const passed = results.reduce((sum, r) => sum + r.passed, 0);
   const failed = results.reduce((sum, r) => sum + r.failed, 0);
   process.stdout.write(`tests: ${passed} passed, ${failed} failed\n`);

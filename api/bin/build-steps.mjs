@@ -27,7 +27,9 @@ export function buildWebIfStale({ force = false } = {}) {
   if (!force && fs.existsSync(index) && fs.statSync(index).mtimeMs > newestMtime(sources)) {
     return false;
   }
-  process.stdout.write('[couplet] building the web app (ng build; about a minute the first time)…\n');
+  process.stdout.write(
+    '[couplet] building the web app (ng build; about a minute the first time)…\n',
+  );
   const result = spawnSync(bin('ng'), ['build', '--configuration', 'production'], {
     cwd: repoRoot,
     stdio: 'inherit',

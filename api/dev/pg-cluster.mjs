@@ -148,12 +148,26 @@ export async function startCluster({ name, port, database, throwaway = false }) 
       '-c listen_addresses=127.0.0.1',
       `-p ${port}`,
       "-c unix_socket_directories=''",
-      ...(throwaway ? ['-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off'] : []),
+      ...(throwaway
+        ? ['-c fsync=off', '-c synchronous_commit=off', '-c full_page_writes=off']
+        : []),
     ].join(' ');
     log(`starting on 127.0.0.1:${port}`);
     mustRun(
       bin,
-      ['pg_ctl', '-D', dataDir, '-l', path.join(root, 'postgres.log'), '-w', '-t', '30', '-o', settings, 'start'],
+      [
+        'pg_ctl',
+        '-D',
+        dataDir,
+        '-l',
+        path.join(root, 'postgres.log'),
+        '-w',
+        '-t',
+        '30',
+        '-o',
+        settings,
+        'start',
+      ],
       'pg_ctl start',
     );
   }
@@ -161,8 +175,18 @@ export async function startCluster({ name, port, database, throwaway = false }) 
   const env = { ...process.env, PGPASSWORD: password };
   const exists = spawnSync(
     path.join(bin, 'psql'),
-    ['-h', '127.0.0.1', '-p', String(port), '-U', 'app', '-d', 'postgres', '-tAc',
-      `SELECT 1 FROM pg_database WHERE datname = '${database}'`],
+    [
+      '-h',
+      '127.0.0.1',
+      '-p',
+      String(port),
+      '-U',
+      'app',
+      '-d',
+      'postgres',
+      '-tAc',
+      `SELECT 1 FROM pg_database WHERE datname = '${database}'`,
+    ],
     { env, encoding: 'utf8' },
   );
   if (exists.status !== 0) throw new Error(`cannot reach the cluster: ${exists.stderr.trim()}`);

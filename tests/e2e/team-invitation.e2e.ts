@@ -58,7 +58,7 @@ describe('team invitation in the browser', () => {
     await ownerPage.getByTestId('nav-members').click();
     await ownerPage.getByTestId('invite-email').fill(colleague.email);
     await ownerPage.getByTestId('invite-role').click();
-    await ownerPage.getByRole('option', { name: 'Viewer' }).click();
+    await ownerPage.getByRole('option', { name: 'Viewer', exact: true }).click();
     await ownerPage.getByTestId('invite-submit').click();
     await expect
       .poll(() => ownerPage.getByTestId('pending-invitations').textContent())
@@ -82,7 +82,9 @@ describe('team invitation in the browser', () => {
     await expect
       .poll(() => colleaguePage.getByTestId('invitation-workspace').textContent())
       .toContain(workspaceName);
-    await expect.poll(() => colleaguePage.getByTestId('invitation-role').textContent()).toBe('Viewer');
+    await expect
+      .poll(() => colleaguePage.getByTestId('invitation-role').textContent())
+      .toBe('Viewer');
     await colleaguePage.getByTestId('invitation-sign-up').click();
     await signUp(colleaguePage, colleague);
     await colleaguePage.getByTestId('accept-invitation').click();

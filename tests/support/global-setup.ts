@@ -3,12 +3,19 @@
 // `npx vitest` directly gets the same throwaway cluster started here.
 import { startCluster } from '../../api/dev/pg-cluster.mjs';
 
-export const testCluster = { name: 'test', port: Number(process.env.COUPLET_TEST_PG_PORT ?? 54339) };
+export const testCluster = {
+  name: 'test',
+  port: Number(process.env.COUPLET_TEST_PG_PORT ?? 54339),
+};
 
 export default async function setup(): Promise<void> {
   if (process.env.DATABASE_URL || process.env.COUPLET_NO_DB === '1') return;
   try {
-    const cluster = await startCluster({ ...testCluster, database: 'couplet_test', throwaway: true });
+    const cluster = await startCluster({
+      ...testCluster,
+      database: 'couplet_test',
+      throwaway: true,
+    });
     process.env.DATABASE_URL = cluster.url;
   } catch (error) {
     // Physics tests need no database; the database tests fail on their own with this reason.

@@ -31,25 +31,29 @@ export default async function setup(project: TestProject): Promise<() => Promise
     process.env.DATABASE_URL ??
     (await startCluster({ ...testCluster, database: 'couplet_test', throwaway: true })).url;
   const baseUrl = `http://127.0.0.1:${e2ePort}`;
-  server = spawn(process.execPath, ['--enable-source-maps', path.join(repoRoot, 'dist/api/main.mjs')], {
-    cwd: repoRoot,
-    stdio: ['ignore', 'inherit', 'inherit'],
-    env: {
-      ...process.env,
-      NODE_ENV: 'test',
-      HOST: '127.0.0.1',
-      PORT: String(e2ePort),
-      APP_URL: baseUrl,
-      DATABASE_URL: databaseUrl,
-      JWT_SECRET: process.env.JWT_SECRET ?? 'e2e'.repeat(43),
-      MAIL_CAPTURE: '1',
-      SMTP_HOST: '127.0.0.1',
-      SMTP_PORT: String(smtpPort),
-      MAIL_FROM: 'Couplet <no-reply@couplet.example>',
-      WEB_DIST: path.join(repoRoot, 'dist/web/browser'),
-      LOG_LEVEL: 'warn',
+  server = spawn(
+    process.execPath,
+    ['--enable-source-maps', path.join(repoRoot, 'dist/api/main.mjs')],
+    {
+      cwd: repoRoot,
+      stdio: ['ignore', 'inherit', 'inherit'],
+      env: {
+        ...process.env,
+        NODE_ENV: 'test',
+        HOST: '127.0.0.1',
+        PORT: String(e2ePort),
+        APP_URL: baseUrl,
+        DATABASE_URL: databaseUrl,
+        JWT_SECRET: process.env.JWT_SECRET ?? 'e2e'.repeat(43),
+        MAIL_CAPTURE: '1',
+        SMTP_HOST: '127.0.0.1',
+        SMTP_PORT: String(smtpPort),
+        MAIL_FROM: 'Couplet <no-reply@couplet.example>',
+        WEB_DIST: path.join(repoRoot, 'dist/web/browser'),
+        LOG_LEVEL: 'warn',
+      },
     },
-  });
+  );
   await waitForHealth(`${baseUrl}/api/v1/health`, server);
   project.provide('baseUrl', baseUrl);
   return async () => {
