@@ -12,9 +12,13 @@
  */
 import { coilFilaments } from '../src/coils/coil-filaments';
 import type { Coil } from '../src/coils/coil-schema';
-import type { RingFilament } from '../src/filaments';
+import type { PathFilament, RingFilament } from '../src/filaments';
 import { preparePair } from '../src/inductance/prepare-pair';
 import { neumannRingPair } from '../src/kernels/neumann-ring-pair';
+import { pathSegments } from '../src/kernels/path-segments';
+import { ringStackFactor } from '../src/kernels/ring-stack-factor';
+import { ringStackTable } from '../src/kernels/ring-stack-table';
+import { poseRotation } from '../src/pose/pose-rotation';
 import type { PoseInput } from '../src/pose/pose-schema';
 import { transformFilaments } from '../src/pose/transform-filaments';
 import { neumannMidpointSum } from './neumann-midpoint-sum';
@@ -91,6 +95,7 @@ interface Row {
   refCheck: string;
 }
 const rows: Row[] = [];
+let tableCheck = { points: 0, maxErr: NaN };
 
 function accuracy(
   values: Float64Array,
@@ -108,6 +113,51 @@ function accuracy(
     peakErr = Math.max(peakErr, e / peak);
   }
   return [pose, peakErr];
+}
+
+/**
+ * The Rx stack's tabulated potential (the table the fast path builds, same options) against
+ * its direct ring sum at 200 points per Tx side, in the given poses: the table's error where the
+ * Tx conductor actually is.
+ */
+function tabulatedFieldError(
+  paths: readonly PathFilament[],
+  rings: readonly RingFilament[],
+  poses: PoseInput[],
+): { points: number; maxErr: number } {
+  const stack = {
+    r: Float64Array.from(rings, (r) => r.radius),
+    z: Float64Array.from(rings, (r) => r.center.z),
+    w: Float64Array.from(rings, (r) => r.weight),
+  };
+  const clearance = paths[0].wireRadius + rings[0].wireRadius;
+  const table = ringStackTable(stack, { clearance });
+  let points = 0;
+  let maxErr = 0;
+  for (const pose of poses) {
+    const [r0, r1, r2] = poseRotation(pose);
+    const t = { x: pose.x ?? 0, y: pose.y ?? 0, z: pose.z ?? 0 };
+    for (const path of paths) {
+      for (const [a, b] of pathSegments(path)) {
+        for (let k = 0; k < 200; k++) {
+          const f = (k + 0.5) / 200;
+          const p = {
+            x: a.x + f * (b.x - a.x) - t.x,
+            y: a.y + f * (b.y - a.y) - t.y,
+            z: a.z + f * (b.z - a.z) - t.z,
+          };
+          const qx = r0.x * p.x + r1.x * p.y + r2.x * p.z;
+          const qy = r0.y * p.x + r1.y * p.y + r2.y * p.z;
+          const qz = r0.z * p.x + r1.z * p.y + r2.z * p.z;
+          const rho = Math.hypot(qx, qy);
+          const want = ringStackFactor(stack, rho * rho, qz);
+          maxErr = Math.max(maxErr, Math.abs(table.factor(rho, qz) - want) / Math.abs(want));
+          points++;
+        }
+      }
+    }
+  }
+  return { points, maxErr };
 }
 
 function timed<T>(f: () => T): [T, number] {
@@ -179,7 +229,13 @@ preparePair(phoneTx, phoneRx).mutualMany(grid(5, 0.02, { z: 0.007 }));
       txPaths,
       transformFilaments(coilFilaments(phoneRx), p).rings as RingFilament[],
     ).M;
-  const [ep, ek] = accuracy(m, poses, [840, 0, 1300], ref);
+  // Centre, both far corners, an edge and two off-centre poses (the map is not symmetric in y).
+  const [ep, ek] = accuracy(m, poses, [840, 0, 1680, 1300, 420, 41], ref);
+  tableCheck = tabulatedFieldError(
+    txPaths,
+    coilFilaments(phoneRx).rings,
+    [0, 840, 1300, 1680].map((i) => poses[i]),
+  );
   rows.push({
     case: '(c) rect 70x50 15 t vs spiral 40 mm, 5° tilt, 41x41',
     poses: poses.length,
@@ -214,6 +270,10 @@ preparePair(phoneTx, phoneRx).mutualMany(grid(5, 0.02, { z: 0.007 }));
 
 console.log('\nCouplet physics benchmark (filament model; times in seconds on this machine)\n');
 console.table(rows);
+console.log(
+  `(c) tabulated Rx potential vs its direct ring sum at ${tableCheck.points} points along the ` +
+    `Tx paths (4 poses): max rel. error ${round(tableCheck.maxErr, 2)}`,
+);
 
 // Naive baseline on case (a): n-gon turns, midpoint Neumann sum, n doubled until it matches the
 // fast evaluator's accuracy (1e-6 relative to the converged reference) or one pose takes > 8 s.

@@ -13,6 +13,7 @@ import { filamentSetMutual } from './filament-set-mutual';
 import { filamentSetSelf } from './filament-set-self';
 import { heightRange } from './height-range';
 import { pairFilaments } from './pair-filaments';
+import { stackRoute } from './stack-route';
 
 /** Options of a prepared pair. */
 export interface PreparePairOptions {
@@ -47,9 +48,13 @@ const union = (a: FilamentSet, b: FilamentSet): FilamentSet => ({
  * the Rx untilted — M depends only on the gap z and the radial offset rho, so poses are grouped by
  * z, offsets keyed by x² + y² (exactly equal for ±x, ±y and x <-> y), and each group is one call
  * of `coaxialCoilMutualMany` (Maxwell at rho = 0; Conway's Bessel form with each coil summarised
- * once per gap; Grover's integral when the coils overlap in height); (2) any other pose sums the
- * filament pairs (`filamentSetMutual`: Babic's single integral for tilted rings, the ring vector
- * potential along polygon sides, Neumann with analytic inner integrals between polygons). Results
+ * once per gap; Grover's integral when the coils overlap in height); (2) a polygon coil against a
+ * coaxial-ring coil in any other pose: the ring stack's summed vector potential, tabulated once
+ * per pair (`ringStackTable`, verified to 1e-12 of the field), integrated along the polygon sides
+ * with distance-graded Gauss–Legendre panels (`stackRoute`, `pathStackMutual`), the remaining
+ * ring pairs by Babic's integral; (3) any other pose sums the filament pairs
+ * (`filamentSetMutual`: Babic's single integral for tilted rings, the ring vector potential
+ * along polygon sides, Neumann with analytic inner integrals between polygons). Results
  * are cached per (z, rho²) for route (1). A Tx `backing` adds its image filaments with weight
  * (mur - 1)/(mur + 1) to the Tx: M = M(Tx, Rx) + w M(image(Tx), Rx) — one image term (the Rx's
  * image seen by the Tx is the same flux by mirror symmetry; counting both would double the plate).
@@ -111,7 +116,9 @@ export function preparePair(tx: Coil, rx: Coil, options: PreparePairOptions = {}
   };
   const parallel = (p: Pose): boolean =>
     txStack !== null && rxStack !== null && p.tiltX === 0 && p.tiltY === 0;
-  const generic = (p: Pose): number => filamentSetMutual(txAll, transformFilaments(rxOwn, p));
+  const viaStack = stackRoute(txAll, rxOwn, txStack, rxStack);
+  const generic = (p: Pose): number =>
+    viaStack ? viaStack(p) : filamentSetMutual(txAll, transformFilaments(rxOwn, p));
 
   const mutualMany = (inputs: readonly PoseInput[]): Float64Array => {
     const poses = inputs.map(accept);
