@@ -1,6 +1,6 @@
 // Vitest global setup: gives the API and integration tests a real PostgreSQL on loopback.
 // `npm test` starts the throwaway cluster itself and passes DATABASE_URL; a developer running
-// `npx vitest` directly gets the same throwaway cluster started here.
+// `npx vitest` directly gets the same throwaway cluster, started here and stopped afterwards.
 import { startCluster } from '../../api/dev/pg-cluster.mjs';
 
 export const testCluster = {
@@ -8,17 +8,15 @@ export const testCluster = {
   port: Number(process.env.COUPLET_TEST_PG_PORT ?? 54339),
 };
 
-export default async function setup(): Promise<void> {
-  if (process.env.DATABASE_URL || process.env.COUPLET_NO_DB === '1') return;
+export default async function setup(): Promise<(() => void) | undefined> {
+  if (process.env.DATABASE_URL || process.env.COUPLET_NO_DB === '1') return undefined;
   try {
-    const cluster = await startCluster({
-      ...testCluster,
-      database: 'couplet_test',
-      throwaway: true,
-    });
+    const cluster = await startCluster({ ...testCluster, database: 'couplet_test', throwaway: true });
     process.env.DATABASE_URL = cluster.url;
+    return () => cluster.stop();
   } catch (error) {
     // Physics tests need no database; the database tests fail on their own with this reason.
     console.warn(`[tests] no PostgreSQL for this run: ${(error as Error).message}`);
+    return undefined;
   }
 }
