@@ -11,7 +11,11 @@ export const testCluster = {
 export default async function setup(): Promise<(() => void) | undefined> {
   if (process.env.DATABASE_URL || process.env.COUPLET_NO_DB === '1') return undefined;
   try {
-    const cluster = await startCluster({ ...testCluster, database: 'couplet_test', throwaway: true });
+    const cluster = await startCluster({
+      ...testCluster,
+      database: 'couplet_test',
+      throwaway: true,
+    });
     process.env.DATABASE_URL = cluster.url;
     return () => cluster.stop();
   } catch (error) {
