@@ -1,5 +1,5 @@
-// `npm test`: every suite against a throwaway PostgreSQL and Debian's Chromium, ending with one line
-// `tests: N passed, N failed`. Plain Node, so it can install what the tests need before anything.
+// `npm test`: every suite against a throwaway PostgreSQL and Debian's Chromium, ending with one
+// line `tests: N passed, N failed`. Plain Node, so it can install what the tests need first.
 //
 // Suites: lint (ESLint + Prettier), vitest (physics, API, integration), Angular component tests
 // (ng test), the production web build, and the browser end-to-end tests (vitest + playwright-core).

@@ -36,7 +36,7 @@ describe('DevMailPage', () => {
 
   const page = (): HTMLElement => fixture.nativeElement as HTMLElement;
 
-  it('says it is for development only, lists mail and follows in-app links through the router', async () => {
+  it('says it is for development only, lists mail, follows in-app links', async () => {
     expect(page().querySelector('[data-testid=dev-only-notice]')?.textContent).toContain(
       'Development only',
     );

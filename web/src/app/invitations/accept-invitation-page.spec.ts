@@ -71,7 +71,7 @@ describe('AcceptInvitationPage', () => {
 
   afterEach(() => http.verify());
 
-  it('shows workspace, role and inviter, and offers sign-in and sign-up that come back here', async () => {
+  it('shows workspace, role and inviter; sign-in and sign-up come back here', async () => {
     await render(false);
     expect(has('status-loading')).toBe(true);
     http.expectOne(previewUrl).flush(preview('pending'));
@@ -116,7 +116,7 @@ describe('AcceptInvitationPage', () => {
     expect(navigate).toHaveBeenCalledWith(['/w', '6f1c2d3e-4b5a-4c6d-8e7f-901a2b3c4d5e']);
   });
 
-  it('says plainly when an invitation was revoked, expired or used, and offers no accept', async () => {
+  it('says plainly when an invitation was revoked, expired or used; no accept', async () => {
     for (const status of ['revoked', 'expired', 'accepted'] as const) {
       TestBed.resetTestingModule();
       await render(false);
