@@ -294,7 +294,8 @@ console.log(
     if (Math.abs(val - ref) / Math.abs(ref) <= 1e-6 || t > 8) break;
   }
   console.log(
-    '\nNaive baseline (case (a) pair at x = 5 mm, 3 mm gap): n segments per turn, midpoint Neumann sum',
+    '\nNaive baseline (case (a) pair at x = 5 mm, 3 mm gap): ' +
+      'n segments per turn, midpoint Neumann sum',
   );
   console.table(steps);
   const last = steps[steps.length - 1];
@@ -305,10 +306,13 @@ console.log(
     const order = Math.log(prev.relErr / last.relErr) / Math.log(last.n / prev.n);
     const nNeeded = last.n * (last.relErr / 1e-6) ** (1 / order);
     naivePerPose = last.time_s * (nNeeded / last.n) ** 2;
-    note = `extrapolated: observed order ${round(order, 2)}, n ≈ ${Math.round(nNeeded)} needed, time ∝ n^2`;
+    note =
+      `extrapolated: observed order ${round(order, 2)}, ` +
+      `n ≈ ${Math.round(nNeeded)} needed, time ∝ n^2`;
   }
   console.log(
-    `fast evaluator: ${round(fastPerPose * 1e6)} µs per pose in a 101x101 map (error ${round(fastErr, 2)})`,
+    `fast evaluator: ${round(fastPerPose * 1e6)} µs per pose in a 101x101 map ` +
+      `(error ${round(fastErr, 2)})`,
   );
   console.log(`naive baseline at 1e-6: ${round(naivePerPose)} s per pose (${note})`);
   console.log(

@@ -2,9 +2,9 @@ import { readFile } from 'node:fs/promises';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import { parseCoil } from '../coils/parse-coil';
-import { expectWithin } from '../conductors/expect-within';
 import { preparePair } from '../inductance/prepare-pair';
 import { coilFigures } from '../link/coil-figures';
+import { expectNear } from '../testing/expect-near';
 import { parseCliArgs } from './parse-cli-args';
 import { runCli, type CliIo } from './run-cli';
 
@@ -78,7 +78,7 @@ describe('couplet mutual', () => {
       expect(out[i].L1).toBe(pair.L1);
       expect(out[i].L2).toBe(pair.L2At(p.pose));
       // k = M / sqrt(L1 L2): a few roundings.
-      expectWithin(out[i].k, out[i].M / Math.sqrt(out[i].L1 * out[i].L2), 1e-15, `k[${i}]`);
+      expectNear(out[i].k, out[i].M / Math.sqrt(out[i].L1 * out[i].L2), 1e-15, `k[${i}]`);
     });
   });
 

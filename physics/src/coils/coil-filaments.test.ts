@@ -4,9 +4,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { PathFilament, Vec3 } from '../filaments';
+import { expectNear } from '../testing/expect-near';
 import { coilFilaments } from './coil-filaments';
 import type { Coil } from './coil-schema';
-import { expectNear } from './expect-near';
 import { ARC_SEGMENTS_PER_QUARTER, SEGMENTS_PER_TURN } from './filament-resolution';
 import { parseCoil } from './parse-coil';
 import { windingLength } from './winding-length';

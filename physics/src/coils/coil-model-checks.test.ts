@@ -8,7 +8,7 @@
 // - H. A. Wheeler, "Simple inductance formulas for radio coils", Proc. IRE 16(10), 1928:
 //   L[µH] = r² n² / (9r + 10l), inches; within ~1 % for l > 0.8 r.
 // - Long-solenoid limit mu0 N² A / l (textbook); it exceeds the current sheet by ~0.85 % at
-//   l/R = 100 and ~18 % at l/R = 5 (CHECK-VALUES.md, textbook limit).
+//   l/R = 100 and ~18 % at l/R = 5 (textbook limit).
 // - S. S. Mohan, M. del Mar Hershenson, S. P. Boyd, T. H. Lee, "Simple accurate expressions for
 //   planar spiral inductances", IEEE J. Solid-State Circuits 34(10), 1999: current-sheet form
 //   L = mu0 n² d_avg c1/2 (ln(c2/ρ) + c3 ρ + c4 ρ²), circle c = 1.00, 2.46, 0.00, 0.20
@@ -21,15 +21,16 @@
 // vanishes (E. B. Rosa, Bull. Bureau of Standards 2, 1906; from memory). Such a "sheet-matched"
 // wire isolates the model from the round-wire effect; what remains is Rosa's mutual correction
 // H, which puts the ring model a little BELOW the sheet (about 0.34 · p / (π R K), ~1 % here).
-// A realistic wire (d = 0.9 p) sits a further 1–3 % below — the "few percent below a current
-// sheet" of the issue. Tolerances below are one-sided where the sign is known.
+// A realistic wire (d = 0.9 p) sits a further 1–3 % below — a ring model of round wire lies a
+// few percent below a current sheet, as it should. Tolerances below are one-sided where the sign
+// is known.
 import ellipe from '@stdlib/math-base-special-ellipe';
 import ellipk from '@stdlib/math-base-special-ellipk';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { selfInductance } from '../inductance/self-inductance';
+import { expectNear } from '../testing/expect-near';
 import type { Coil } from './coil-schema';
-import { expectNear } from './expect-near';
 
 const MU0 = 4e-7 * Math.PI;
 const SHEET_MATCHED = 2 * Math.exp(-1.25);

@@ -1,4 +1,4 @@
-// Validation of coil JSON. The references here are the rules of the issue and plain geometry
+// Validation of coil JSON. The references here are the documented coil rules and plain geometry
 // (turns overlap when centre lines are closer than the conductor width), no outside numbers.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

@@ -4,25 +4,17 @@
 // Maxwell's mutual inductance of coaxial circles with complete elliptic integrals (Maxwell,
 // Treatise, 1873, art. 701), evaluated with @stdlib/math-base-special-ellipk and -ellipe
 // (parameter m = k²).
-import ellipe from '@stdlib/math-base-special-ellipe';
-import ellipk from '@stdlib/math-base-special-ellipk';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { FilamentSet, RingFilament, Vec3 } from '../filaments';
 import { transformFilaments } from '../pose/transform-filaments';
+import { expectNear } from '../testing/expect-near';
+import { maxwellStdlib } from '../testing/maxwell-stdlib';
 import { coilFilaments } from './coil-filaments';
-import { expectNear } from './expect-near';
 import { ferriteImages } from './ferrite-images';
 import { parseCoil } from './parse-coil';
 
 const MU0 = 4e-7 * Math.PI;
-
-/** Maxwell: M of coaxial circles of radii a, b at axial distance d (both right-handed about +z). */
-function maxwell(a: number, b: number, d: number): number {
-  const m = (4 * a * b) / ((a + b) ** 2 + d * d);
-  const k = Math.sqrt(m);
-  return MU0 * Math.sqrt(a * b) * ((2 / k - k) * ellipk(m) - (2 / k) * ellipe(m));
-}
 
 /** A ring as a polygon of n points, current right-handed about its normal. */
 function ringPolygon(ring: RingFilament, n: number): Vec3[] {
@@ -160,13 +152,13 @@ describe('ferriteImages: physics (Jackson problem 5.17)', () => {
     const tx = coilFilaments(parseCoil({ kind: 'ring', radius: R, wireRadius: 5e-4 }));
     const image = ferriteImages(tx, { mur: 1e5, distance: 0.002 }).rings[0];
     const signed = (ring: RingFilament, z: number) =>
-      ring.weight * ring.normal.z * maxwell(R, ring.radius, Math.abs(ring.center.z - z));
+      ring.weight * ring.normal.z * maxwellStdlib(R, ring.radius, Math.abs(ring.center.z - z));
     // L: the Tx ring's self term gains its mutual with its image (4 mm below it).
     const lSelf = MU0 * R * (Math.log((8 * R) / 5e-4) - 1.75);
     const lGain = signed(image, 0);
     expect(lGain, `image adds ${lGain} H to L = ${lSelf} H`).toBeGreaterThan(0);
     // M with an Rx ring 5 mm above: the image adds flux of the same sign.
-    const m0 = maxwell(R, 0.015, 0.005);
+    const m0 = maxwellStdlib(R, 0.015, 0.005);
     const m1 = m0 + signed(image, 0.005);
     expect(m1, `M with backing ${m1} H vs without ${m0} H`).toBeGreaterThan(m0);
   });

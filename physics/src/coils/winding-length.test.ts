@@ -3,7 +3,7 @@
 // numerical quadrature; rounded-rectangle perimeter 2(w + h) - (8 - 2π)c; helix length
 // N·sqrt((2πr)² + p²).
 import { describe, it } from 'vitest';
-import { expectNear } from './expect-near';
+import { expectNear } from '../testing/expect-near';
 import { parseCoil } from './parse-coil';
 import { windingLength } from './winding-length';
 
@@ -62,7 +62,7 @@ describe('windingLength', () => {
     // The spiral's radial drift adds b²/(2r²) ≈ (p/2πr)²/2 < 1e-3 to each turn's length.
     expectNear(windingLength(coil), rings, 1e-3, 'spiral vs rings');
   });
-  it('pitch above twice the inner radius: the ring circumferences (no negative-radius spiral)', () => {
+  it('pitch above twice the inner radius: ring circumferences (no negative-radius spiral)', () => {
     const coil = parseCoil({
       kind: 'circular-spiral',
       turns: 3.5,

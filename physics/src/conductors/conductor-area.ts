@@ -1,5 +1,5 @@
+import { requirePositive } from '../guards/require-positive';
 import type { Conductor } from './conductor';
-import { requirePositive } from './require-finite';
 
 /**
  * Metal cross-section of a conductor, the area that carries DC current.
@@ -18,19 +18,19 @@ import { requirePositive } from './require-finite';
 export function conductorArea(conductor: Conductor): number {
   switch (conductor.type) {
     case 'round':
-      requirePositive('conductor.diameter', conductor.diameter);
+      requirePositive('conductor.diameter', conductor.diameter, 'm');
       return (Math.PI * conductor.diameter * conductor.diameter) / 4;
     case 'litz': {
       const { strands, strandDiameter } = conductor;
       if (!Number.isInteger(strands) || strands < 1) {
         throw new RangeError(`conductor.strands: must be an integer >= 1 (got ${strands})`);
       }
-      requirePositive('conductor.strandDiameter', strandDiameter);
+      requirePositive('conductor.strandDiameter', strandDiameter, 'm');
       return (strands * Math.PI * strandDiameter * strandDiameter) / 4;
     }
     case 'trace':
-      requirePositive('conductor.width', conductor.width);
-      requirePositive('conductor.thickness', conductor.thickness);
+      requirePositive('conductor.width', conductor.width, 'm');
+      requirePositive('conductor.thickness', conductor.thickness, 'm');
       return conductor.width * conductor.thickness;
     default:
       throw new RangeError(`conductor.type: must be 'round', 'litz' or 'trace'`);

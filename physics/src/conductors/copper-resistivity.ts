@@ -1,4 +1,4 @@
-import { requireFinite } from './require-finite';
+import { requireFinite } from '../guards/require-finite';
 
 /**
  * Resistivity of annealed copper at 20 °C, Ω·m: the International Annealed Copper Standard (IACS,
@@ -27,7 +27,7 @@ export const COPPER_REFERENCE_TEMPERATURE = 20;
  * @example copperResistivity(100) // ≈ 2.26e-8 Ω·m
  */
 export function copperResistivity(temperature: number = COPPER_REFERENCE_TEMPERATURE): number {
-  requireFinite('temperature', temperature);
+  requireFinite('temperature', temperature, '°C');
   // Beyond this band the linear law drifts by several percent; refuse instead of misleading.
   if (temperature < -100 || temperature > 250) {
     throw new RangeError(`temperature: must be between -100 and 250 °C (got ${temperature})`);

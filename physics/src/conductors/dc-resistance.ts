@@ -1,7 +1,8 @@
+import { requireNonNegative } from '../guards/require-non-negative';
+import { requirePositive } from '../guards/require-positive';
 import type { Conductor } from './conductor';
 import { conductorArea } from './conductor-area';
 import { COPPER_RESISTIVITY_20C } from './copper-resistivity';
-import { requireNonNegative, requirePositive } from './require-finite';
 
 /**
  * DC resistance of a length of conductor.
@@ -22,7 +23,7 @@ export function dcResistance(
   conductor: Conductor,
   resistivity: number = COPPER_RESISTIVITY_20C,
 ): number {
-  requireNonNegative('length', length);
-  requirePositive('resistivity', resistivity);
+  requireNonNegative('length', length, 'm');
+  requirePositive('resistivity', resistivity, 'Ω·m');
   return (resistivity * length) / conductorArea(conductor);
 }

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { expectNear } from '../testing/expect-near';
 import { acResistanceFactor } from './ac-resistance-factor';
-import { expectWithin } from './expect-within';
 import { roundWireAcFactor } from './round-wire-ac-factor';
 import { skinDepth } from './skin-depth';
 import { traceAcFactor } from './trace-ac-factor';
@@ -22,13 +22,13 @@ describe('roundWireAcFactor', () => {
       [10, 3.799],
       [20, 7.328],
     ];
-    for (const [x, expected] of table) expectWithin(ratioAtX(x), expected, 5e-4, `x = ${x}`);
+    for (const [x, expected] of table) expectNear(ratioAtX(x), expected, 5e-4, `x = ${x}`);
   });
 
   it('follows the low-frequency expansion 1 + x⁴/192 (Ramo, Whinnery & Van Duzer §5.6)', () => {
     // The next term is O(x⁸) ≈ 1e-7 at x = 0.3; 1e-8 relative after removing x⁴/192 is ample.
     for (const x of [1e-3, 0.05, 0.1, 0.3]) {
-      expectWithin(ratioAtX(x), 1 + x ** 4 / 192, 1e-7, `x = ${x}`);
+      expectNear(ratioAtX(x), 1 + x ** 4 / 192, 1e-7, `x = ${x}`);
     }
   });
 
@@ -46,15 +46,15 @@ describe('roundWireAcFactor', () => {
     for (const v of [u * 0.9, u, u * 1.1]) {
       const s = wireImpedanceRatioSeries(v);
       const a = wireImpedanceRatioAsymptotic(v);
-      expectWithin(a[0], s[0], 1e-10, `R/Rdc at u = ${v}`);
-      expectWithin(a[1], s[1], 1e-10, `X/Rdc at u = ${v}`);
+      expectNear(a[0], s[0], 1e-10, `R/Rdc at u = ${v}`);
+      expectNear(a[1], s[1], 1e-10, `X/Rdc at u = ${v}`);
     }
   });
 
   it('tends to 1 at low frequency and grows monotonically with frequency (seeded property)', () => {
     expect(roundWireAcFactor(1e-3, Infinity)).toBe(1);
     // 1 mm copper at 10 Hz: a/δ ≈ 0.024, so (a/δ)⁴/48 ≈ 7e-9 is all that separates it from 1.
-    expectWithin(roundWireAcFactor(1e-3, skinDepth(1.72e-8, 10)), 1, 1e-8, '10 Hz');
+    expectNear(roundWireAcFactor(1e-3, skinDepth(1.72e-8, 10)), 1, 1e-8, '10 Hz');
     fc.assert(
       fc.property(
         fc.double({ min: 1, max: 1e8, noNaN: true }),
@@ -76,11 +76,11 @@ describe('traceAcFactor', () => {
   it('follows 1 + (t/δ)⁴/180 at low and t/(2δ) at high frequency (Dowell 1966)', () => {
     // Low: next term O((t/δ)⁸); at t/δ = 0.2 that is < 1e-8.
     for (const a of [1e-3, 0.05, 0.2])
-      expectWithin(traceAcFactor(a, 1), 1 + a ** 4 / 180, 1e-8, `${a}`);
+      expectNear(traceAcFactor(a, 1), 1 + a ** 4 / 180, 1e-8, `${a}`);
     // High: the remainder is exponentially small (e^{−t/δ}); 1e-6 at t/δ ≥ 20.
-    for (const a of [20, 39, 41, 100]) expectWithin(traceAcFactor(a, 1), a / 2, 1e-6, `${a}`);
+    for (const a of [20, 39, 41, 100]) expectNear(traceAcFactor(a, 1), a / 2, 1e-6, `${a}`);
     // Across the three branches the function stays continuous within 1e-9.
-    expectWithin(traceAcFactor(0.0099999, 1), traceAcFactor(0.0100001, 1), 1e-9, 'low switch');
+    expectNear(traceAcFactor(0.0099999, 1), traceAcFactor(0.0100001, 1), 1e-9, 'low switch');
   });
 
   it('grows with frequency and is 1 at DC', () => {

@@ -1,4 +1,4 @@
-import { requireFinite, requirePositive } from './require-finite';
+import { requirePositive } from '../guards/require-positive';
 import { wireImpedanceRatio } from './wire-impedance-ratio';
 
 /**
@@ -21,9 +21,8 @@ import { wireImpedanceRatio } from './wire-impedance-ratio';
  * @example roundWireAcFactor(1e-3, 0.226e-3) // ≈ 1.36 (1 mm copper at 85 kHz)
  */
 export function roundWireAcFactor(diameter: number, delta: number): number {
-  requirePositive('diameter', diameter);
+  requirePositive('diameter', diameter, 'm');
   if (delta === Infinity) return 1;
-  requireFinite('skinDepth', delta);
-  requirePositive('skinDepth', delta);
+  requirePositive('skinDepth', delta, 'm');
   return wireImpedanceRatio(diameter / 2 / delta)[0];
 }

@@ -1,7 +1,5 @@
-import { requirePositive } from './require-finite';
-
-/** Permeability of free space, H/m (CODATA 2018: 1.25663706212e-6; 4π·1e-7 to 1e-9 relative). */
-const MU0 = 1.25663706212e-6;
+import { requirePositive } from '../guards/require-positive';
+import { MU0 } from '../kernels/mu0';
 
 /**
  * Skin depth of a good conductor: the depth at which an AC current density falls to 1/e.
@@ -19,8 +17,8 @@ const MU0 = 1.25663706212e-6;
  * @example skinDepth(1.72e-8, 85e3) // ≈ 2.26e-4 m (0.23 mm, copper at 85 kHz)
  */
 export function skinDepth(resistivity: number, frequency: number, mur = 1): number {
-  requirePositive('resistivity', resistivity);
-  requirePositive('frequency', frequency);
+  requirePositive('resistivity', resistivity, 'Ω·m');
+  requirePositive('frequency', frequency, 'Hz');
   requirePositive('mur', mur);
   return Math.sqrt(resistivity / (Math.PI * frequency * MU0 * mur));
 }

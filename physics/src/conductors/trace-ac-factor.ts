@@ -1,4 +1,4 @@
-import { requireFinite, requirePositive } from './require-finite';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * Skin-effect resistance ratio R_ac/R_dc of a flat rectangular trace.
@@ -22,10 +22,9 @@ import { requireFinite, requirePositive } from './require-finite';
  * @example traceAcFactor(35e-6, 25e-6) // ≈ 1.02 (1 oz copper at 6.78 MHz)
  */
 export function traceAcFactor(thickness: number, delta: number): number {
-  requirePositive('thickness', thickness);
+  requirePositive('thickness', thickness, 'm');
   if (delta === Infinity) return 1;
-  requireFinite('skinDepth', delta);
-  requirePositive('skinDepth', delta);
+  requirePositive('skinDepth', delta, 'm');
   const a = thickness / delta; // a = 2Δ
   // Below a = 1e-2 the closed form cancels catastrophically; the series is exact to 1e-16 there.
   if (a < 1e-2) return 1 + a ** 4 / 180;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { expectWithin } from '../conductors/expect-within';
+import { expectNear } from '../testing/expect-near';
 import type { CouplingField } from './coupling-field';
 import { toleranceEnvelope } from './tolerance-envelope';
 
@@ -20,8 +20,8 @@ describe('toleranceEnvelope', () => {
       0.5,
     );
     // Vertices at (±0.5, 0), (0, ±0.5) by linear interpolation: area 2·0.5², exact to rounding.
-    expectWithin(e.area, 0.5, 1e-14, 'diamond area');
-    expectWithin(e.chargeRadius, 0.5 / Math.SQRT2, 1e-14, 'diamond inradius');
+    expectNear(e.area, 0.5, 1e-14, 'diamond area');
+    expectNear(e.chargeRadius, 0.5 / Math.SQRT2, 1e-14, 'diamond inradius');
     expect(e.worst).toEqual({ x: 0, y: 0, value: 1 });
     expect(e.nominal).toEqual({ x: 0, y: 0, value: 1, meets: true });
     expect(e.chargeRadiusLimitedByMap).toBe(false);
@@ -40,17 +40,11 @@ describe('toleranceEnvelope', () => {
     const tol = (h * h) / (8 * r);
     expect(e.polygons.length).toBe(1);
     for (const [x, y] of e.polygons[0][0]) {
-      expectWithin(Math.hypot(x - cx, y - cy), r, tol, `vertex (${x}, ${y})`, false);
+      expectNear(Math.hypot(x - cx, y - cy), r, tol, `vertex (${x}, ${y})`, true);
     }
     // The polygon is inscribed with chords of ≤ h√2: sagitta ≤ h²/(4r) inward, plus the above.
-    expectWithin(e.chargeRadius, r, (h * h) / (4 * r) + tol, 'charge radius', false);
-    expectWithin(
-      e.area,
-      Math.PI * r * r,
-      2 * Math.PI * r * ((h * h) / (4 * r) + tol),
-      'area',
-      false,
-    );
+    expectNear(e.chargeRadius, r, (h * h) / (4 * r) + tol, 'charge radius', true);
+    expectNear(e.area, Math.PI * r * r, 2 * Math.PI * r * ((h * h) / (4 * r) + tol), 'area', true);
     expect(e.nominal.meets).toBe(true);
   });
 
@@ -65,8 +59,8 @@ describe('toleranceEnvelope', () => {
     const steps = [...xs.slice(1).map((x, i) => x - xs[i]), ys[1] - ys[0]];
     const tol = (1.1 * Math.max(...steps) ** 2) / (8 * r);
     for (const [x, y] of e.polygons[0][0])
-      expectWithin(Math.hypot(x, y), r, tol, `(${x}, ${y})`, false);
-    expectWithin(e.area, Math.PI * r * r, 5e-3, 'area');
+      expectNear(Math.hypot(x, y), r, tol, `(${x}, ${y})`, true);
+    expectNear(e.area, Math.PI * r * r, 5e-3, 'area');
   });
 
   it('gives the offset ellipse its area πab and the exact distance from the nominal point', () => {
@@ -79,8 +73,8 @@ describe('toleranceEnvelope', () => {
     const d = b * Math.sqrt(1 - (x0 * x0) / (a * a - b * b));
     const h = 0.0005;
     // Crossing error h²/(8b) with the smaller semi-axis, and the chord sagitta h²/(4b).
-    expectWithin(e.chargeRadius, d, (3 * h * h) / (8 * b), 'ellipse distance', false);
-    expectWithin(e.area, Math.PI * a * b, 2e-3, 'ellipse area');
+    expectNear(e.chargeRadius, d, (3 * h * h) / (8 * b), 'ellipse distance', true);
+    expectNear(e.area, Math.PI * a * b, 2e-3, 'ellipse area');
     expect(e.nominal.meets).toBe(true);
     // The worst sample inside is at most one cell step of |∇f| ≈ 2/b · h above the threshold.
     expect(e.worst!.value).toBeGreaterThanOrEqual(1);
@@ -95,7 +89,7 @@ describe('toleranceEnvelope', () => {
     expect(e.polygons.length).toBe(1);
     expect(e.polygons[0].length).toBe(2);
     // Annulus area π((r0 + w)² − (r0 − w)²) = 4π r0 w; 1 % covers the inner ring's coarser chords.
-    expectWithin(e.area, 4 * Math.PI * r0 * w, 0.01, 'annulus area');
+    expectNear(e.area, 4 * Math.PI * r0 * w, 0.01, 'annulus area');
     expect(e.chargeRadius).toBe(0);
     expect(e.nominal.meets).toBe(false);
   });
@@ -118,8 +112,8 @@ describe('toleranceEnvelope', () => {
       0,
     );
     // The region is exactly the sampled rectangle 0.05 × 0.02.
-    expectWithin(e.area, 0.05 * 0.02, 1e-12, 'whole-map area');
-    expectWithin(e.chargeRadius, 0.01, 1e-15, 'distance to the y edges', false);
+    expectNear(e.area, 0.05 * 0.02, 1e-12, 'whole-map area');
+    expectNear(e.chargeRadius, 0.01, 1e-15, 'distance to the y edges', true);
     expect(e.chargeRadiusLimitedByMap).toBe(true);
     expect(e.worst).toEqual({ x: -0.02, y: 0.01, value: 1 - 0.02 - 0.01 });
   });

@@ -6,18 +6,11 @@ import { maxwellCoaxial } from '../kernels/maxwell-coaxial';
 import { neumannRingPair } from '../kernels/neumann-ring-pair';
 import { ringSelf } from '../kernels/ring-self';
 import { transformFilaments } from '../pose/transform-filaments';
+import { expectNear } from '../testing/expect-near';
 import { filamentSetMutual } from './filament-set-mutual';
 import { mutualInductance } from './mutual-inductance';
 import { preparePair } from './prepare-pair';
 import { selfInductance } from './self-inductance';
-
-function near(label: string, got: number, want: number, tol: number, scale = Math.abs(want)): void {
-  const err = Math.abs(got - want) / scale;
-  expect(
-    err,
-    `${label}: got ${got}, expected ${want}, rel. error ${err} > ${tol}`,
-  ).toBeLessThanOrEqual(tol);
-}
 
 // Demo geometry of our own: phone-size spirals and a rectangular pad.
 const tx = {
@@ -47,7 +40,7 @@ const ring = (r: number): Coil => ({ kind: 'ring', radius: r, wireRadius: 5e-4 }
 
 describe('selfInductance', () => {
   it('one ring is the Rosa–Grover ring formula', () => {
-    near('ring', selfInductance(ring(0.02)), ringSelf(0.02, 5e-4), 1e-15);
+    expectNear(selfInductance(ring(0.02)), ringSelf(0.02, 5e-4), 1e-15, 'ring');
   });
   it('a rings coil is its self terms plus Maxwell mutual terms', () => {
     const coil = {
@@ -69,7 +62,7 @@ describe('selfInductance', () => {
       want += ringSelf(r, 3e-4);
       for (const [r2, z2] of rr) if (r2 !== r || z2 !== z) want += maxwellCoaxial(r, r2, z2 - z);
     }
-    near('rings', selfInductance(coil), want, 1e-14);
+    expectNear(selfInductance(coil), want, 1e-14, 'rings');
   });
   it('grows with turns and with ferrite permeability; the high-frequency form is lower', () => {
     const more = { ...tx, turns: 12 } as Coil;
@@ -84,11 +77,11 @@ describe('selfInductance', () => {
     // Jackson problem 5.17 with mur -> ∞ (weight (mur-1)/(mur+1) = 1 - 2e-5 at mur = 1e5).
     const w = (1e5 - 1) / (1e5 + 1);
     const want = ringSelf(0.02, 5e-4) + w * maxwellCoaxial(0.02, 0.02, 0.004);
-    near(
-      'image',
+    expectNear(
       selfInductance({ ...ring(0.02), backing: { mur: 1e5, distance: 0.002 } } as Coil),
       want,
       1e-14,
+      'image',
     );
   });
   it('rejects bad coils with a RangeError naming the field', () => {
@@ -117,12 +110,12 @@ describe('preparePair routes agree with the generic filament sum and with Neuman
     poses.forEach((p, i) => {
       // 1e-9 of the aligned M: Bessel truncation ~1e-10; zero crossings make per-pose ratios
       // unfair.
-      near(
-        `pose ${JSON.stringify(p)}`,
+      expectNear(
         m[i],
         filamentSetMutual(txF, transformFilaments(rxF, p)),
-        1e-9,
-        peak,
+        1e-9 * peak,
+        `pose ${JSON.stringify(p)}`,
+        true,
       );
     });
   });
@@ -132,12 +125,12 @@ describe('preparePair routes agree with the generic filament sum and with Neuman
     let brute = 0;
     for (const a of txF.rings) for (const b of placed.rings) brute += neumannRingPair(a, b, 256);
     // Trapezoid 256^2 on separations >= 2 mm of 10–25 mm rings: ~1e-10; tolerance 1e-8.
-    near('tilted', pair.mutual(p), brute, 1e-8);
+    expectNear(pair.mutual(p), brute, 1e-8, 'tilted');
   });
   it('M12 = M21: swapping coils with the opposite offset (untilted)', () => {
     const a = preparePair(tx, rx).mutual({ x: 0.007, y: 0.002, z: 0.004 });
     const b = preparePair(rx, tx).mutual({ x: -0.007, y: -0.002, z: -0.004 });
-    near('reciprocity', a, b, 1e-9);
+    expectNear(a, b, 1e-9, 'reciprocity');
   });
   it('a polygon Tx against a ring Rx in a tilted pose is finite and reciprocal', () => {
     const p = { x: 0.003, y: 0.001, z: 0.005, tiltX: 5 };
@@ -165,12 +158,12 @@ describe('polygon against ring stack (stack route) vs the per-ring adaptive rout
     fc.assert(
       fc.property(tilted, (p) => {
         // Stated panel error of the route (ratio 2, 10 points) ~1e-9; the old route ~1e-12.
-        near(
-          `pose ${JSON.stringify(p)}`,
+        expectNear(
           pair.mutual(p),
           filamentSetMutual(rectF, transformFilaments(rxF, p)),
-          1e-9,
-          peak,
+          1e-9 * peak,
+          `pose ${JSON.stringify(p)}`,
+          true,
         );
       }),
       { seed: 42, numRuns: 12 },
@@ -182,12 +175,12 @@ describe('polygon against ring stack (stack route) vs the per-ring adaptive rout
     const peak = Math.abs(pair.mutual({ z: 0.003 }));
     fc.assert(
       fc.property(tilted, (p) => {
-        near(
-          `pose ${JSON.stringify(p)}`,
+        expectNear(
           pair.mutual(p),
           filamentSetMutual(txF, transformFilaments(rectF, p)),
-          1e-9,
-          peak,
+          1e-9 * peak,
+          `pose ${JSON.stringify(p)}`,
+          true,
         );
       }),
       { seed: 43, numRuns: 8 },
@@ -196,7 +189,7 @@ describe('polygon against ring stack (stack route) vs the per-ring adaptive rout
   it('M12 = M21 across the two stack routes (untilted, opposite offsets)', () => {
     const a = preparePair(rect, rx).mutual({ x: 0.006, y: -0.003, z: 0.004 });
     const b = preparePair(rx, rect).mutual({ x: -0.006, y: 0.003, z: -0.004 });
-    near('reciprocity', a, b, 1e-9);
+    expectNear(a, b, 1e-9, 'reciprocity');
   });
   it('a map gives the same numbers in one call as pose by pose', () => {
     const poses = Array.from({ length: 9 }, (_, i) => ({ x: 0.005 * (i - 4), z: 0.004, tiltX: 5 }));
@@ -226,7 +219,7 @@ describe('invariants of a prepared pair (fast-check, seeded)', () => {
       { seed: 42, numRuns: 25 },
     );
   });
-  it('rotating the Rx about its own axis (yaw) and the pose about the Tx axis changes nothing', () => {
+  it('Rx yaw about its own axis and pose rotation about the Tx axis change nothing', () => {
     fc.assert(
       fc.property(pose, fc.double({ min: -180, max: 180, noNaN: true }), (p, yaw) => {
         const t = (yaw * Math.PI) / 180;
@@ -237,7 +230,13 @@ describe('invariants of a prepared pair (fast-check, seeded)', () => {
           yaw,
         };
         const base = pair.mutual({ x: p.x, y: p.y, z: p.z });
-        near('rotated pose', pair.mutual(rotated), base, 1e-9, Math.abs(pair.mutual({ z: p.z })));
+        expectNear(
+          pair.mutual(rotated),
+          base,
+          1e-9 * Math.abs(pair.mutual({ z: p.z })),
+          'rotated pose',
+          true,
+        );
       }),
       { seed: 42, numRuns: 15 },
     );
@@ -252,17 +251,17 @@ describe('invariants of a prepared pair (fast-check, seeded)', () => {
 
 describe('ferrite backing in a pair', () => {
   const backed = { ...tx, backing: { mur: 2000, distance: 1e-3 } } as Coil;
-  it('M = M(Tx, Rx) + w M(image(Tx), Rx): one image term, raising M for coils on the same side', () => {
+  it('M = M(Tx, Rx) + w M(image(Tx), Rx): one image term, raising M on the same side', () => {
     const p = { x: 0.005, z: 0.004 };
     const free = mutualInductance(tx, rx, p);
     const withPlate = mutualInductance(backed, rx, p);
     expect(withPlate).toBeGreaterThan(free);
     // mur = 1 gives weight 0: no change at all.
-    near(
-      'mur 1',
+    expectNear(
       mutualInductance({ ...tx, backing: { mur: 1, distance: 1e-3 } } as Coil, rx, p),
       free,
       1e-15,
+      'mur 1',
     );
   });
   it('the Rx inductance rises near the plate and k stays within 1', () => {

@@ -1,4 +1,6 @@
 import besselj1 from '@stdlib/math-base-special-besselj1';
+import { requireNonNegative } from '../guards/require-non-negative';
+import { requirePositive } from '../guards/require-positive';
 
 /** One coaxial ring of a coil for the Bessel summary. */
 export interface SummaryRing {
@@ -32,12 +34,8 @@ export interface SummaryRing {
  */
 export function besselPairSummary(rings: readonly SummaryRing[], k: Float64Array): Float64Array {
   for (const ring of rings) {
-    if (!(ring.r > 0) || !Number.isFinite(ring.r)) {
-      throw new RangeError(`ring radius must be a finite number > 0 m (got ${ring.r})`);
-    }
-    if (!(ring.depth >= 0) || !Number.isFinite(ring.depth)) {
-      throw new RangeError(`ring depth must be a finite number >= 0 m (got ${ring.depth})`);
-    }
+    requirePositive('ring radius', ring.r, 'm');
+    requireNonNegative('ring depth', ring.depth, 'm');
   }
   const out = new Float64Array(k.length);
   for (let n = 0; n < k.length; n++) {

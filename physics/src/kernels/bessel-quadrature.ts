@@ -1,3 +1,4 @@
+import { requirePositive } from '../guards/require-positive';
 import { gaussLegendre } from './gauss-legendre';
 
 /** Nodes k (1/m) and weights (1/m) for integrals over k in [0, kmax]. */
@@ -46,20 +47,18 @@ export function besselQuadrature(
   reach: number,
   options: BesselQuadratureOptions = {},
 ): BesselNodes {
-  if (!(h > 0) || !Number.isFinite(h))
-    throw new RangeError(`h must be a finite number > 0 m (got ${h})`);
-  if (!(reach > 0) || !Number.isFinite(reach)) {
-    throw new RangeError(`reach must be a finite number > 0 m (got ${reach})`);
-  }
+  requirePositive('h', h, 'm');
+  requirePositive('reach', reach, 'm');
   const decay = options.decay ?? BESSEL_DECAY;
   const points = options.pointsPerPanel ?? 8;
   const kmax = decay / h;
   const width = Math.min((2 * Math.PI) / reach, 2 / h);
   const panels = Math.ceil(kmax / width);
   if (panels * points > BESSEL_MAX_NODES) {
+    const hMin = (decay * points) / (BESSEL_MAX_NODES * width * width);
     throw new RangeError(
-      `h must be above ${((decay * points) / (BESSEL_MAX_NODES * width * width)).toExponential(2)} m ` +
-        `for the Bessel form at this size (got ${h} m)`,
+      `h: must be above ${hMin.toExponential(2)} for the Bessel form at this size, in m ` +
+        `(got ${h})`,
     );
   }
   const rule = gaussLegendre(points);

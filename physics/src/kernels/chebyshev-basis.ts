@@ -24,7 +24,7 @@ const bases = new Map<number, ChebyshevBasis>();
  */
 export function chebyshevBasis(n: number): ChebyshevBasis {
   if (!Number.isInteger(n) || n < 2 || n > 64) {
-    throw new RangeError(`n must be an integer in 2..64 (got ${String(n)})`);
+    throw new RangeError(`n: must be an integer in 2..64 (got ${String(n)})`);
   }
   const hit = bases.get(n);
   if (hit) return hit;

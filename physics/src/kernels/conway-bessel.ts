@@ -1,9 +1,10 @@
 import besselj0 from '@stdlib/math-base-special-besselj0';
+import { requireFinite } from '../guards/require-finite';
+import { requireNonNegative } from '../guards/require-non-negative';
+import { requirePositive } from '../guards/require-positive';
 import { besselPairSummary } from './bessel-pair-summary';
 import { besselQuadrature } from './bessel-quadrature';
 import { MU0 } from './mu0';
-import { requireFinite } from './require-finite';
-import { requirePositive } from './require-positive';
 
 /**
  * Mutual inductance of two parallel circular filaments by the Bessel-function (Hankel) form (H).
@@ -27,10 +28,9 @@ import { requirePositive } from './require-positive';
 export function conwayBessel(r1: number, r2: number, rho: number, z: number): number {
   requirePositive('r1', r1, 'm');
   requirePositive('r2', r2, 'm');
-  requireFinite('rho', rho, 'm');
+  requireNonNegative('rho', rho, 'm');
   requireFinite('z', z, 'm');
-  if (rho < 0) throw new RangeError(`rho must be >= 0 m (got ${rho})`);
-  if (z === 0) throw new RangeError('z must be non-zero for the Bessel form (got 0 m)');
+  if (z === 0) throw new RangeError('z: must be non-zero for the Bessel form (got 0)');
   const h = Math.abs(z);
   const nodes = besselQuadrature(h, r1 + r2 + rho);
   const s1 = besselPairSummary([{ r: r1, depth: 0, weight: 1 }], nodes.k);

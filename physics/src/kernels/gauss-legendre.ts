@@ -22,7 +22,7 @@ const cache = new Map<number, GaussRule>();
  */
 export function gaussLegendre(n: number): GaussRule {
   if (!Number.isInteger(n) || n < 1 || n > 512) {
-    throw new RangeError(`n must be an integer in 1..512 (got ${String(n)})`);
+    throw new RangeError(`n: must be an integer in 1..512 (got ${String(n)})`);
   }
   const hit = cache.get(n);
   if (hit) return hit;
@@ -31,32 +31,15 @@ export function gaussLegendre(n: number): GaussRule {
   for (let i = 0; i < Math.ceil(n / 2); i++) {
     // Tricomi's approximation of the i-th root, descending from 1.
     let x = Math.cos((Math.PI * (i + 0.75)) / (n + 0.5));
-    let dp = 1;
     for (let iter = 0; iter < 100; iter++) {
-      let p0 = 1;
-      let p1 = x;
-      for (let k = 2; k <= n; k++) {
-        const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-        p0 = p1;
-        p1 = p2;
-      }
-      const pn = n === 1 ? x : p1;
-      const pm = n === 1 ? 1 : p0;
-      dp = (n * (x * pn - pm)) / (x * x - 1);
+      const [pn, dp] = legendreWithSlope(n, x);
       const dx = pn / dp;
       x -= dx;
       // 1e-16 is below the spacing of doubles near the roots: Newton has converged.
       if (Math.abs(dx) < 1e-16) break;
     }
-    // Recompute the derivative at the converged root for the weight.
-    let p0 = 1;
-    let p1 = x;
-    for (let k = 2; k <= n; k++) {
-      const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
-      p0 = p1;
-      p1 = p2;
-    }
-    dp = n === 1 ? 1 : (n * (x * p1 - p0)) / (x * x - 1);
+    // The derivative at the converged root, for the weight.
+    const dp = legendreWithSlope(n, x)[1];
     const w = 2 / ((1 - x * x) * dp * dp);
     nodes[n - 1 - i] = x;
     nodes[i] = -x;
@@ -67,4 +50,19 @@ export function gaussLegendre(n: number): GaussRule {
   const rule = { nodes, weights };
   cache.set(n, rule);
   return rule;
+}
+
+/**
+ * P_n(x) and P_n'(x) by the three-term recurrence (k P_k = (2k − 1) x P_(k−1) − (k − 1) P_(k−2))
+ * and P_n' = n (x P_n − P_(n−1)) / (x² − 1), for |x| < 1 (DLMF 18.9.1, 18.9.18).
+ */
+function legendreWithSlope(n: number, x: number): [number, number] {
+  let p0 = 1;
+  let p1 = x;
+  for (let k = 2; k <= n; k++) {
+    const p2 = ((2 * k - 1) * x * p1 - (k - 1) * p0) / k;
+    p0 = p1;
+    p1 = p2;
+  }
+  return [p1, (n * (x * p1 - p0)) / (x * x - 1)];
 }

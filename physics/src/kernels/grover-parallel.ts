@@ -1,5 +1,6 @@
-import { requireFinite } from './require-finite';
-import { requirePositive } from './require-positive';
+import { requireFinite } from '../guards/require-finite';
+import { requireNonNegative } from '../guards/require-non-negative';
+import { requirePositive } from '../guards/require-positive';
 import { ringPotentialFactor } from './ring-potential-factor';
 
 /** 2^15 nodes on the half circle resolve separations down to ~1e-4 of the radius. */
@@ -29,9 +30,8 @@ const MAX_NODES = 32768;
 export function groverParallel(r1: number, r2: number, rho: number, z: number): number {
   requirePositive('r1', r1, 'm');
   requirePositive('r2', r2, 'm');
-  requireFinite('rho', rho, 'm');
+  requireNonNegative('rho', rho, 'm');
   requireFinite('z', z, 'm');
-  if (rho < 0) throw new RangeError(`rho must be >= 0 m (got ${rho})`);
   // Path along the smaller ring: its peaks are wider in angle.
   const a = r1 >= r2 ? r1 : r2;
   const b = r1 >= r2 ? r2 : r1;

@@ -1,20 +1,11 @@
-import ellipe from '@stdlib/math-base-special-ellipe';
-import ellipk from '@stdlib/math-base-special-ellipk';
 import { all, create, type BigNumber } from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import type { RingFilament } from '../filaments';
+import { expectNear } from '../testing/expect-near';
+import { maxwellStdlib } from '../testing/maxwell-stdlib';
 import { maxwellCoaxial } from './maxwell-coaxial';
 import { MU0 } from './mu0';
 import { neumannRingPair } from './neumann-ring-pair';
-
-/** Fails with input, result, expected and tolerance in the message. */
-function near(label: string, got: number, want: number, rel: number): void {
-  const err = Math.abs(got - want) / Math.abs(want);
-  expect(
-    err,
-    `${label}: got ${got}, expected ${want}, rel. error ${err} > ${rel}`,
-  ).toBeLessThanOrEqual(rel);
-}
 
 // Independent reference: the textbook form of Maxwell's formula (Treatise art. 701, DLMF 19.34)
 // in 40-digit arithmetic (mathjs BigNumber), K and E by the AGM of DLMF 19.8.1 and 19.8.6, so the
@@ -62,11 +53,11 @@ describe('maxwellCoaxial against outside references', () => {
       [0.02, 0.02, 20],
       [1e-3, 5e-4, 2],
     ]) {
-      near(`M(${r1}, ${r2}, ${d})`, maxwellCoaxial(r1, r2, d), maxwellBig(r1, r2, d), 1e-13);
+      expectNear(maxwellCoaxial(r1, r2, d), maxwellBig(r1, r2, d), 1e-13, `M(${r1}, ${r2}, ${d})`);
     }
   });
 
-  it('matches the textbook form with @stdlib ellipk/ellipe where that form is well conditioned', () => {
+  it('matches the textbook form with @stdlib ellipk/ellipe where it is well conditioned', () => {
     // @stdlib/math-base-special-ellipk and -ellipe take m = k^2. For m >= 0.3 the textbook form
     // loses at most ~2 digits to cancellation, so 1e-13 holds.
     for (const [r1, r2, d] of [
@@ -75,12 +66,10 @@ describe('maxwellCoaxial against outside references', () => {
       [0.3, 0.2, 0.15],
       [0.02, 0.018, 0.0005],
     ]) {
-      const D = (r1 + r2) ** 2 + d * d;
-      const m = (4 * r1 * r2) / D;
-      const k = Math.sqrt(m);
+      const m = (4 * r1 * r2) / ((r1 + r2) ** 2 + d * d);
       expect(m).toBeGreaterThan(0.3);
-      const want = MU0 * Math.sqrt(r1 * r2) * ((2 / k - k) * ellipk(m) - (2 / k) * ellipe(m));
-      near(`stdlib M(${r1}, ${r2}, ${d})`, maxwellCoaxial(r1, r2, d), want, 1e-13);
+      const want = maxwellStdlib(r1, r2, d);
+      expectNear(maxwellCoaxial(r1, r2, d), want, 1e-13, `stdlib M(${r1}, ${r2}, ${d})`);
     }
   });
 
@@ -111,7 +100,12 @@ describe('maxwellCoaxial limits', () => {
     const a = 0.02;
     for (const r of [2e-5, 2e-6]) {
       const want = MU0 * a * (Math.log((8 * a) / r) - 2);
-      near(`near field r = ${r}`, maxwellCoaxial(a, a, r), want, 1e-5 * (r / 2e-5) ** 2 + 1e-12);
+      expectNear(
+        maxwellCoaxial(a, a, r),
+        want,
+        1e-5 * (r / 2e-5) ** 2 + 1e-12,
+        `near field r = ${r}`,
+      );
     }
   });
 
@@ -120,11 +114,11 @@ describe('maxwellCoaxial limits', () => {
     const [r1, r2] = [0.02, 0.015];
     for (const d of [20, 200]) {
       const want = (MU0 * Math.PI * r1 * r1 * r2 * r2) / (2 * d ** 3);
-      near(
-        `dipole d = ${d}`,
+      expectNear(
         maxwellCoaxial(r1, r2, d),
         want,
         10 * ((r1 * r1 + r2 * r2) / (d * d)),
+        `dipole d = ${d}`,
       );
     }
   });

@@ -1,6 +1,6 @@
+import { requireFinite } from '../guards/require-finite';
+import { requirePositive } from '../guards/require-positive';
 import { MU0 } from './mu0';
-import { requireFinite } from './require-finite';
-import { requirePositive } from './require-positive';
 import { ringPotentialShape } from './ring-potential-shape';
 
 /**

@@ -21,7 +21,7 @@ import { MU0 } from './mu0';
  * @example neumannRingPair(ringA, ringB, 512); // ≈ maxwellCoaxial(...) for coaxial rings
  */
 export function neumannRingPair(a: RingFilament, b: RingFilament, n: number): number {
-  if (!Number.isInteger(n) || n < 3) throw new RangeError(`n must be an integer >= 3 (got ${n})`);
+  if (!Number.isInteger(n) || n < 3) throw new RangeError(`n: must be an integer >= 3 (got ${n})`);
   const [ua, va] = inPlaneBasis(a.normal);
   const [ub, vb] = inPlaneBasis(b.normal);
   const pb = new Float64Array(3 * n);

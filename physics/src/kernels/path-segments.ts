@@ -18,7 +18,7 @@ export function pathSegments(path: PathFilament): Array<[Vec3, Vec3]> {
     const q = pts[(i + 1) % pts.length];
     for (const c of [p.x, p.y, p.z, q.x, q.y, q.z]) {
       if (!Number.isFinite(c))
-        throw new RangeError(`path point coordinates must be finite m (got ${c})`);
+        throw new RangeError(`path point: coordinates must be finite numbers, in m (got ${c})`);
     }
     if (p.x !== q.x || p.y !== q.y || p.z !== q.z) out.push([p, q]);
   }

@@ -1,9 +1,9 @@
 import type { PathFilament, Vec3 } from '../filaments';
+import { requirePositive } from '../guards/require-positive';
 import { adaptiveSegmentQuadrature } from './adaptive-segment-quadrature';
 import { MU0 } from './mu0';
 import { pathSegments } from './path-segments';
 import { pointSegmentDistance } from './point-segment-distance';
-import { requirePositive } from './require-positive';
 import { segmentLogIntegral } from './segment-log-integral';
 import { segmentSegmentMutual } from './segment-segment-mutual';
 
@@ -65,7 +65,7 @@ export function polylineSelf(path: PathFilament, options: PolylineSelfOptions = 
     total += l;
   }
   if (total <= a)
-    throw new RangeError(`path length must exceed the wire radius ${a} m (got ${total} m)`);
+    throw new RangeError(`path length: must exceed the wire radius ${a}, in m (got ${total})`);
   let sum = 0;
   for (let i = 0; i < segs.length; i++) {
     const si = segs[i];

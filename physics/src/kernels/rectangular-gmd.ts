@@ -1,4 +1,4 @@
-import { requirePositive } from './require-positive';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * Geometric mean distance of a rectangular cross-section (PCB trace, strip) from itself (m).

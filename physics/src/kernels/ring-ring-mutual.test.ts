@@ -1,19 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { RingFilament, Vec3 } from '../filaments';
+import { expectNear } from '../testing/expect-near';
 import { conwayBessel } from './conway-bessel';
 import { groverParallel } from './grover-parallel';
 import { maxwellCoaxial } from './maxwell-coaxial';
 import { neumannRingPair } from './neumann-ring-pair';
 import { ringRingMutual } from './ring-ring-mutual';
-
-function near(label: string, got: number, want: number, tol: number, scale = Math.abs(want)): void {
-  const err = Math.abs(got - want) / scale;
-  expect(
-    err,
-    `${label}: got ${got}, expected ${want}, rel. error ${err} > ${tol}`,
-  ).toBeLessThanOrEqual(tol);
-}
 
 const unit = (v: Vec3): Vec3 => {
   const s = Math.hypot(v.x, v.y, v.z);
@@ -49,7 +42,7 @@ describe('ring pairs in any pose against Neumann brute force', () => {
     ['parallel offset', ring(0.02, { x: 0, y: 0, z: 0 }), ring(0.02, { x: 0.03, y: 0, z: 0.003 })],
   ];
   it.each(cases)('%s', (label, a, b) => {
-    near(label, ringRingMutual(a, b), neumannRingPair(a, b, 384), 1e-9);
+    expectNear(ringRingMutual(a, b), neumannRingPair(a, b, 384), 1e-9, label);
   });
 });
 
@@ -67,8 +60,8 @@ describe('Grover, Conway (Bessel) and the general single integral agree', () => 
       const b = ringRingMutual(ring(r1, { x: 0, y: 0, z: 0 }), ring(r2, { x: rho, y: 0, z }));
       const c = conwayBessel(r1, r2, rho, z);
       const scale = maxwellCoaxial(r1, r2, z);
-      near('Babic vs Grover', b, g, 1e-11, scale);
-      near('Conway vs Grover', c, g, 1e-8, scale);
+      expectNear(b, g, 1e-11 * scale, 'Babic vs Grover', true);
+      expectNear(c, g, 1e-8 * scale, 'Conway vs Grover', true);
     });
   }
 });
@@ -94,7 +87,7 @@ describe('invariants (fast-check, seeded)', () => {
         // Swapping the roles changes which ring is the path only for equal radii; 1e-10 of the
         // scale.
         const scale = Math.abs(maxwellCoaxial(a.radius, b.radius, 0.3)) + 1e-30;
-        near('M12 vs M21', ringRingMutual(a, b), ringRingMutual(b, a), 1e-10, scale);
+        expectNear(ringRingMutual(a, b), ringRingMutual(b, a), 1e-10 * scale, 'M12 vs M21', true);
       }),
       { seed: 42, numRuns: 60 },
     );
@@ -111,7 +104,7 @@ describe('invariants (fast-check, seeded)', () => {
         const a2 = { ...a, center: rot(a.center), normal: rot(a.normal) };
         const b2 = { ...b, center: rot(b.center), normal: rot(b.normal) };
         const scale = Math.abs(maxwellCoaxial(a.radius, b.radius, 0.3));
-        near('rotated', ringRingMutual(a2, b2), ringRingMutual(a, b), 1e-10, scale);
+        expectNear(ringRingMutual(a2, b2), ringRingMutual(a, b), 1e-10 * scale, 'rotated', true);
       }),
       { seed: 42, numRuns: 40 },
     );
@@ -152,9 +145,13 @@ describe('invariants (fast-check, seeded)', () => {
 
 describe('bad input', () => {
   it('names the parameter and its range', () => {
-    expect(() => groverParallel(-1, 0.02, 0, 0.01)).toThrow(/r1 must be a finite number > 0 m/);
-    expect(() => groverParallel(0.02, 0.02, -1, 0.01)).toThrow(/rho must be >= 0/);
-    expect(() => conwayBessel(0.02, 0.02, 0, 0)).toThrow(/z must be non-zero/);
+    expect(() => groverParallel(-1, 0.02, 0, 0.01)).toThrow(
+      /^r1: must be a finite number > 0, in m \(got -1\)$/,
+    );
+    expect(() => groverParallel(0.02, 0.02, -1, 0.01)).toThrow(
+      /^rho: must be a finite number >= 0, in m/,
+    );
+    expect(() => conwayBessel(0.02, 0.02, 0, 0)).toThrow(/^z: must be non-zero/);
     expect(() => conwayBessel(0.02, Infinity, 0, 0.01)).toThrow(/r2/);
   });
   it('reports touching rings instead of returning a wrong number', () => {

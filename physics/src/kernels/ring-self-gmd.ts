@@ -1,5 +1,5 @@
+import { requirePositive } from '../guards/require-positive';
 import { MU0 } from './mu0';
-import { requirePositive } from './require-positive';
 
 /**
  * Self-inductance of a thin circular ring of any cross-section given its geometric mean
@@ -22,7 +22,7 @@ export function ringSelfGmd(radius: number, gmd: number): number {
   requirePositive('radius', radius, 'm');
   requirePositive('gmd', gmd, 'm');
   if (gmd >= radius) {
-    throw new RangeError(`gmd must be below the ring radius ${radius} m (got ${gmd} m)`);
+    throw new RangeError(`gmd: must be below the ring radius ${radius}, in m (got ${gmd})`);
   }
   return MU0 * radius * (Math.log((8 * radius) / gmd) - 2);
 }

@@ -1,5 +1,5 @@
+import { requirePositive } from '../guards/require-positive';
 import { MU0 } from './mu0';
-import { requirePositive } from './require-positive';
 
 /** Options of the ring self-inductance. */
 export interface RingSelfOptions {
@@ -36,7 +36,7 @@ export function ringSelf(
   requirePositive('wireRadius', wireRadius, 'm');
   if (wireRadius >= radius) {
     throw new RangeError(
-      `wireRadius must be below the ring radius ${radius} m (got ${wireRadius} m)`,
+      `wireRadius: must be below the ring radius ${radius}, in m (got ${wireRadius})`,
     );
   }
   const tail = options.highFrequency ? 2 : 1.75;

@@ -1,5 +1,5 @@
 import type { RingFilament, Vec3 } from '../filaments';
-import { requireFinite } from './require-finite';
+import { requireFinite } from '../guards/require-finite';
 import { ringPotentialFactor } from './ring-potential-factor';
 
 /**

@@ -1,4 +1,4 @@
-import { requirePositive } from './require-positive';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * Geometric mean distance of a round wire's cross-section from itself (m).

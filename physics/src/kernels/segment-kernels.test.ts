@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { PathFilament, RingFilament, Vec3 } from '../filaments';
+import { expectNear } from '../testing/expect-near';
 import { gaussLegendre } from './gauss-legendre';
 import { MU0 } from './mu0';
 import { pathPathMutual } from './path-path-mutual';
@@ -10,13 +11,6 @@ import { ringSelf } from './ring-self';
 import { segmentSegmentMutual } from './segment-segment-mutual';
 import { segmentSelf } from './segment-self';
 
-function near(label: string, got: number, want: number, tol: number, scale = Math.abs(want)): void {
-  const err = Math.abs(got - want) / scale;
-  expect(
-    err,
-    `${label}: got ${got}, expected ${want}, rel. error ${err} > ${tol}`,
-  ).toBeLessThanOrEqual(tol);
-}
 const v = (x: number, y: number, z: number): Vec3 => ({ x, y, z });
 
 /** Brute-force Neumann for two segments: composite Gauss–Legendre, 64 panels x 16 points. */
@@ -53,7 +47,7 @@ describe('straight filaments against brute-force Neumann', () => {
     ['collinear apart', v(0, 0, 0), v(0.05, 0, 0), v(0.06, 0, 0), v(0.1, 0, 0)],
   ];
   it.each(cases)('%s', (label, a1, b1, a2, b2) => {
-    near(label, segmentSegmentMutual(a1, b1, a2, b2), bruteSegments(a1, b1, a2, b2), 1e-9);
+    expectNear(segmentSegmentMutual(a1, b1, a2, b2), bruteSegments(a1, b1, a2, b2), 1e-9, label);
   });
   it('meeting at a corner: Grover closed form vs graded quadrature of the same integral', () => {
     // Collinear continuation (F. W. Grover, 1946, ch. 5): ∫∫ 1/(s + t) = (l+m) ln(l+m) - l ln l - m
@@ -61,11 +55,11 @@ describe('straight filaments against brute-force Neumann', () => {
     const [l, m] = [0.03, 0.05];
     const want =
       (MU0 / (4 * Math.PI)) * ((l + m) * Math.log(l + m) - l * Math.log(l) - m * Math.log(m));
-    near(
-      'collinear corner',
+    expectNear(
       segmentSegmentMutual(v(0, 0, 0), v(l, 0, 0), v(l, 0, 0), v(l + m, 0, 0)),
       want,
       1e-13,
+      'collinear corner',
     );
     // Perpendicular corner: zero (t1 · t2 = 0).
     expect(segmentSegmentMutual(v(0, 0, 0), v(l, 0, 0), v(l, 0, 0), v(l, m, 0))).toBe(0);
@@ -82,42 +76,50 @@ describe('partial and loop self-inductance', () => {
     // Rosa 1908; next term of order a/l: l/a = 1e4 gives ~1e-4 of the log-sized bracket.
     const [l, a] = [1, 1e-4];
     const want = ((MU0 * l) / (2 * Math.PI)) * (Math.log((2 * l) / a) - 0.75);
-    near('segmentSelf', segmentSelf(l, a * Math.exp(-0.25)), want, 2e-4);
+    expectNear(segmentSelf(l, a * Math.exp(-0.25)), want, 2e-4, 'segmentSelf');
   });
-  it('square loop of round wire: (2 mu0 s / π)(ln(s/a) - 0.524), Grover 1946 ch. 7 (from memory)', () => {
-    // The constant follows from Rosa's partial inductances: ln 2 - 3/4 - asinh(1) + √2 - 1.
-    // Model and formula differ by O(a/s): s/a = 200, tolerance 2e-3.
-    const [s, a] = [0.1, 5e-4];
-    const square: PathFilament = {
-      points: [v(0, 0, 0), v(s, 0, 0), v(s, s, 0), v(0, s, 0)],
-      closed: true,
-      wireRadius: a,
-      weight: 1,
-    };
-    const want = ((2 * MU0 * s) / Math.PI) * (Math.log(s / a) - 0.524);
-    near('square', polylineSelf(square), want, 2e-3);
-    // High frequency: -0.774 (surface current).
-    near(
-      'square HF',
-      polylineSelf(square, { highFrequency: true }),
-      ((2 * MU0 * s) / Math.PI) * (Math.log(s / a) - 0.774),
-      2e-3,
-    );
-  });
-  it('a finely cut circle tends to the ring formula mu0 R (ln(8R/a) - 7/4) (Rosa & Grover 1912)', () => {
-    // Polygon error O(1/n^2) plus thin-ring error O((a/R)^2) = 6e-4 · small constant: 2e-5 at n =
-    // 1024.
-    const [R, a, n] = [0.02, 5e-4, 1024];
-    const circle: PathFilament = {
-      points: Array.from({ length: n }, (_, i) =>
-        v(R * Math.cos((2 * Math.PI * i) / n), R * Math.sin((2 * Math.PI * i) / n), 0),
-      ),
-      closed: true,
-      wireRadius: a,
-      weight: 1,
-    };
-    near('polygon vs ring', polylineSelf(circle), ringSelf(R, a), 2e-5);
-  });
+  it(
+    'square loop of round wire: (2 mu0 s / π)(ln(s/a) - 0.524), ' +
+      'Grover 1946 ch. 7 (from memory)',
+    () => {
+      // The constant follows from Rosa's partial inductances: ln 2 - 3/4 - asinh(1) + √2 - 1.
+      // Model and formula differ by O(a/s): s/a = 200, tolerance 2e-3.
+      const [s, a] = [0.1, 5e-4];
+      const square: PathFilament = {
+        points: [v(0, 0, 0), v(s, 0, 0), v(s, s, 0), v(0, s, 0)],
+        closed: true,
+        wireRadius: a,
+        weight: 1,
+      };
+      const want = ((2 * MU0 * s) / Math.PI) * (Math.log(s / a) - 0.524);
+      expectNear(polylineSelf(square), want, 2e-3, 'square');
+      // High frequency: -0.774 (surface current).
+      expectNear(
+        polylineSelf(square, { highFrequency: true }),
+        ((2 * MU0 * s) / Math.PI) * (Math.log(s / a) - 0.774),
+        2e-3,
+        'square HF',
+      );
+    },
+  );
+  it(
+    'a finely cut circle tends to the ring formula mu0 R (ln(8R/a) - 7/4) ' +
+      '(Rosa & Grover 1912)',
+    () => {
+      // Polygon error O(1/n^2) plus thin-ring error O((a/R)^2) = 6e-4 · small constant: 2e-5 at n =
+      // 1024.
+      const [R, a, n] = [0.02, 5e-4, 1024];
+      const circle: PathFilament = {
+        points: Array.from({ length: n }, (_, i) =>
+          v(R * Math.cos((2 * Math.PI * i) / n), R * Math.sin((2 * Math.PI * i) / n), 0),
+        ),
+        closed: true,
+        wireRadius: a,
+        weight: 1,
+      };
+      expectNear(polylineSelf(circle), ringSelf(R, a), 2e-5, 'polygon vs ring');
+    },
+  );
 });
 
 describe('polygons and rings', () => {
@@ -136,32 +138,37 @@ describe('polygons and rings', () => {
     wireRadius: 1e-4,
     weight: 1,
   });
-  it('inscribed polygons converge to the ring pair at second order (ring–polygon and polygon–polygon)', () => {
-    const want = ringRingMutual(ring(0.02, v(0, 0, 0)), ring(0.015, v(0.004, 0, 0.003)));
-    const err = (n: number) => [
-      Math.abs(
-        pathRingMutual(polygon(0.02, n, v(0, 0, 0)), ring(0.015, v(0.004, 0, 0.003))) - want,
-      ) / want,
-      Math.abs(
-        pathPathMutual(polygon(0.02, n, v(0, 0, 0)), polygon(0.015, n, v(0.004, 0, 0.003))) - want,
-      ) / want,
-    ];
-    const [e64, e256] = [err(64), err(256)];
-    // Quadrupling n divides an O(1/n^2) error by 16; allow 12–20.
-    for (const k of [0, 1]) {
-      const ratio = e64[k] / e256[k];
-      expect(ratio, `convergence ratio ${ratio} (errors ${e64[k]}, ${e256[k]})`).toBeGreaterThan(
-        12,
-      );
-      expect(ratio).toBeLessThan(20);
-    }
-  });
+  it(
+    'inscribed polygons converge to the ring pair at second order ' +
+      '(ring–polygon and polygon–polygon)',
+    () => {
+      const want = ringRingMutual(ring(0.02, v(0, 0, 0)), ring(0.015, v(0.004, 0, 0.003)));
+      const err = (n: number) => [
+        Math.abs(
+          pathRingMutual(polygon(0.02, n, v(0, 0, 0)), ring(0.015, v(0.004, 0, 0.003))) - want,
+        ) / want,
+        Math.abs(
+          pathPathMutual(polygon(0.02, n, v(0, 0, 0)), polygon(0.015, n, v(0.004, 0, 0.003))) -
+            want,
+        ) / want,
+      ];
+      const [e64, e256] = [err(64), err(256)];
+      // Quadrupling n divides an O(1/n^2) error by 16; allow 12–20.
+      for (const k of [0, 1]) {
+        const ratio = e64[k] / e256[k];
+        expect(ratio, `convergence ratio ${ratio} (errors ${e64[k]}, ${e256[k]})`).toBeGreaterThan(
+          12,
+        );
+        expect(ratio).toBeLessThan(20);
+      }
+    },
+  );
   it('ring vector potential along a polygon matches Neumann with a 4096-gon ring (1e-6)', () => {
     const p = polygon(0.02, 12, v(0, 0, 0));
     const r = ring(0.01, v(0.005, 0.002, 0.004));
     const viaRing = pathRingMutual(p, r);
     const viaSegments = pathPathMutual(p, polygon(0.01, 4096, v(0.005, 0.002, 0.004)));
     // The 4096-gon stands in for the ring to (2π/4096)^2 / 6 ≈ 4e-7.
-    near('reciprocity', viaSegments, viaRing, 1e-6);
+    expectNear(viaSegments, viaRing, 1e-6, 'reciprocity');
   });
 });

@@ -25,7 +25,7 @@ import { ringPotentialFactor } from './ring-potential-factor';
 export function segmentRingMutual(a: Vec3, b: Vec3, ring: RingFilament): number {
   const L = Math.hypot(b.x - a.x, b.y - a.y, b.z - a.z);
   if (!(L > 0) || !Number.isFinite(L))
-    throw new RangeError('segment length must be a finite number > 0 m');
+    throw new RangeError('segment length: must be a finite number > 0, in m');
   const ux = (b.x - a.x) / L;
   const uy = (b.y - a.y) / L;
   const uz = (b.z - a.z) / L;

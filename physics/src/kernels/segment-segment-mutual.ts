@@ -43,7 +43,7 @@ export function segmentSegmentMutual(a1: Vec3, b1: Vec3, a2: Vec3, b2: Vec3): nu
   let l1 = Math.hypot(b1.x - a1.x, b1.y - a1.y, b1.z - a1.z);
   let l2 = Math.hypot(b2.x - a2.x, b2.y - a2.y, b2.z - a2.z);
   if (!(l1 > 0) || !(l2 > 0) || !Number.isFinite(l1 + l2)) {
-    throw new RangeError('segment length must be a finite number > 0 m');
+    throw new RangeError('segment length: must be a finite number > 0, in m');
   }
   // Source = longer segment (analytic), path = shorter (quadrature).
   let [sa, sb, pa, pb] = [a1, b1, a2, b2];

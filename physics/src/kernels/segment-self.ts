@@ -1,5 +1,5 @@
+import { requirePositive } from '../guards/require-positive';
 import { MU0 } from './mu0';
-import { requirePositive } from './require-positive';
 
 /**
  * Partial self-inductance of a straight conductor of given length and geometric mean distance (H).

@@ -1,6 +1,6 @@
 import type { Coil } from '../coils/coil-schema';
 import { coilResistance } from '../conductors/coil-resistance';
-import { requireNonNegative } from '../conductors/require-finite';
+import { requireNonNegative } from '../guards/require-non-negative';
 import { selfInductance } from '../inductance/self-inductance';
 import { qualityFactor } from './quality-factor';
 import { storedEnergy } from './stored-energy';
@@ -55,7 +55,7 @@ export interface CoilFigureOptions {
  */
 export function coilFigures(coil: Coil, options: CoilFigureOptions = {}): CoilFigures {
   const current = options.current ?? 1;
-  requireNonNegative('current', current);
+  requireNonNegative('current', current, 'A');
   const L = selfInductance(coil);
   const r = coilResistance(coil, {
     frequency: options.frequency,

@@ -1,4 +1,5 @@
-import { requireFinite, requirePositive } from '../conductors/require-finite';
+import { requireFinite } from '../guards/require-finite';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * How far |k| may exceed 1 and still be read as 1: the filament models promise 1e-6 relative on
@@ -23,9 +24,9 @@ export const COUPLING_TOLERANCE = 1e-6;
  * @example couplingCoefficient(2e-6, 10e-6, 6.4e-6) // ≈ 0.25
  */
 export function couplingCoefficient(M: number, L1: number, L2: number): number {
-  requireFinite('M', M);
-  requirePositive('L1', L1);
-  requirePositive('L2', L2);
+  requireFinite('M', M, 'H');
+  requirePositive('L1', L1, 'H');
+  requirePositive('L2', L2, 'H');
   const k = M / Math.sqrt(L1 * L2);
   if (Math.abs(k) > 1 + COUPLING_TOLERANCE) {
     throw new RangeError(

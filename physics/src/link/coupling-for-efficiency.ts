@@ -1,4 +1,5 @@
-import { requireFinite, requirePositive } from '../conductors/require-finite';
+import { requireFinite } from '../guards/require-finite';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * The smallest coupling coefficient at which a link can reach a given maximum efficiency: the

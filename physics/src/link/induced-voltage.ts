@@ -1,4 +1,6 @@
-import { requireFinite, requireNonNegative, requirePositive } from '../conductors/require-finite';
+import { requireFinite } from '../guards/require-finite';
+import { requireNonNegative } from '../guards/require-non-negative';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * Open-circuit voltage induced in the Rx by the Tx current.
@@ -15,8 +17,8 @@ import { requireFinite, requireNonNegative, requirePositive } from '../conductor
  * @example inducedVoltage(5e-6, 85e3, 20) // ≈ 53.4 V
  */
 export function inducedVoltage(M: number, frequency: number, I1: number): number {
-  requireFinite('M', M);
-  requirePositive('frequency', frequency);
-  requireNonNegative('current', I1);
+  requireFinite('M', M, 'H');
+  requirePositive('frequency', frequency, 'Hz');
+  requireNonNegative('current', I1, 'A');
   return 2 * Math.PI * frequency * Math.abs(M) * I1;
 }

@@ -1,21 +1,13 @@
-import ellipe from '@stdlib/math-base-special-ellipe';
-import ellipk from '@stdlib/math-base-special-ellipk';
 import { describe, expect, it } from 'vitest';
 import { parseCoil } from '../coils/parse-coil';
-import { expectWithin } from '../conductors/expect-within';
 import { preparePair } from '../inductance/prepare-pair';
+import { expectNear } from '../testing/expect-near';
+import { maxwellStdlib } from '../testing/maxwell-stdlib';
 import { couplingCoefficient } from './coupling-coefficient';
 import { linkFigures } from './link-figures';
 import { maxLinkEfficiency } from './max-link-efficiency';
 
 const MU0 = 4e-7 * Math.PI;
-
-/** Maxwell's coaxial-ring formula with @stdlib K and E (parameter m = k²), Treatise art. 701. */
-function maxwell(r1: number, r2: number, d: number): number {
-  const m = (4 * r1 * r2) / ((r1 + r2) ** 2 + d * d);
-  const k = Math.sqrt(m);
-  return MU0 * Math.sqrt(r1 * r2) * ((2 / k - k) * ellipk(m) - (2 / k) * ellipe(m));
-}
 
 describe('linkFigures', () => {
   const tx = parseCoil({ kind: 'ring', radius: 0.02, wireRadius: 5e-4 });
@@ -26,19 +18,19 @@ describe('linkFigures', () => {
     const w = 2 * Math.PI * f;
     const fig = linkFigures(tx, rx, { z: 0.005 }, { frequency: f, current: 2 });
     // Maxwell via @stdlib elliptic integrals; 4π·1e-7 vs CODATA mu0 and quadrature: 1e-8.
-    expectWithin(fig.M, maxwell(0.02, 0.015, 0.005), 1e-8, 'M coaxial');
-    // Ring self terms, Rosa & Grover 1912 (CHECK-VALUES): 1e-8.
-    expectWithin(fig.L1, MU0 * 0.02 * (Math.log(0.16 / 5e-4) - 1.75), 1e-8, 'L1');
-    expectWithin(fig.L2, MU0 * 0.015 * (Math.log(0.12 / 4e-4) - 1.75), 1e-8, 'L2');
+    expectNear(fig.M, maxwellStdlib(0.02, 0.015, 0.005), 1e-8, 'M coaxial');
+    // Ring self terms, Rosa & Grover 1912 (from memory): 1e-8.
+    expectNear(fig.L1, MU0 * 0.02 * (Math.log(0.16 / 5e-4) - 1.75), 1e-8, 'L1');
+    expectNear(fig.L2, MU0 * 0.015 * (Math.log(0.12 / 4e-4) - 1.75), 1e-8, 'L2');
     // The rest are the closed forms of the link functions: arithmetic, 1e-12.
-    expectWithin(fig.k, couplingCoefficient(fig.M, fig.L1, fig.L2), 1e-12, 'k');
-    expectWithin(fig.Q1, (w * fig.L1) / fig.R1, 1e-12, 'Q1');
-    expectWithin(fig.etaMax, maxLinkEfficiency(fig.k, fig.Q1, fig.Q2), 1e-12, 'eta');
+    expectNear(fig.k, couplingCoefficient(fig.M, fig.L1, fig.L2), 1e-12, 'k');
+    expectNear(fig.Q1, (w * fig.L1) / fig.R1, 1e-12, 'Q1');
+    expectNear(fig.etaMax, maxLinkEfficiency(fig.k, fig.Q1, fig.Q2), 1e-12, 'eta');
     const x = fig.k ** 2 * fig.Q1 * fig.Q2;
-    expectWithin(fig.optimalLoad, fig.R2 * Math.sqrt(1 + x), 1e-12, 'R_L,opt');
-    expectWithin(fig.inducedVoltage, w * fig.M * 2, 1e-12, 'V2');
-    expectWithin(fig.resonantVoltageTx, w * fig.L1 * 2, 1e-12, 'V_L1');
-    expectWithin(1 / (w * w * fig.C2), fig.L2, 1e-12, 'C2 resonates L2');
+    expectNear(fig.optimalLoad, fig.R2 * Math.sqrt(1 + x), 1e-12, 'R_L,opt');
+    expectNear(fig.inducedVoltage, w * fig.M * 2, 1e-12, 'V2');
+    expectNear(fig.resonantVoltageTx, w * fig.L1 * 2, 1e-12, 'V_L1');
+    expectNear(1 / (w * w * fig.C2), fig.L2, 1e-12, 'C2 resonates L2');
     for (const [key, value] of Object.entries(fig)) expect(Number.isFinite(value), key).toBe(true);
   });
 
@@ -57,7 +49,7 @@ describe('linkFigures', () => {
 
   it('rejects a missing frequency and intersecting coils', () => {
     expect(() => linkFigures(tx, rx, { z: 0.005 }, { frequency: 0 })).toThrow(
-      /frequency: must be > 0/,
+      /frequency: must be a finite number > 0/,
     );
     expect(() => linkFigures(tx, tx, { z: 0 }, { frequency: 1e5 })).toThrow(/intersect/);
   });

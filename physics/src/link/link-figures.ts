@@ -1,6 +1,7 @@
 import type { Coil } from '../coils/coil-schema';
 import { coilResistance } from '../conductors/coil-resistance';
-import { requireNonNegative, requirePositive } from '../conductors/require-finite';
+import { requireNonNegative } from '../guards/require-non-negative';
+import { requirePositive } from '../guards/require-positive';
 import { preparePair, type PreparedPair } from '../inductance/prepare-pair';
 import type { PoseInput } from '../pose/pose-schema';
 import { couplingCoefficient } from './coupling-coefficient';
@@ -80,9 +81,9 @@ export function linkFigures(
   options: LinkFigureOptions,
 ): LinkFigures {
   const { frequency } = options;
-  requirePositive('frequency', frequency);
+  requirePositive('frequency', frequency, 'Hz');
   const current = options.current ?? 1;
-  requireNonNegative('current', current);
+  requireNonNegative('current', current, 'A');
   const pair = options.pair ?? preparePair(tx, rx);
   const M = pair.mutual(pose);
   const L1 = pair.L1;

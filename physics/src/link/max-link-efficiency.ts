@@ -1,4 +1,5 @@
-import { requireFinite, requirePositive } from '../conductors/require-finite';
+import { requireFinite } from '../guards/require-finite';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * Maximum efficiency of a two-coil resonant link, reached at the optimal load.

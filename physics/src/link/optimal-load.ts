@@ -1,4 +1,5 @@
-import { requireFinite, requirePositive } from '../conductors/require-finite';
+import { requireFinite } from '../guards/require-finite';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * Load resistance that gives the maximum link efficiency, for a series-compensated Rx.
@@ -17,7 +18,7 @@ import { requireFinite, requirePositive } from '../conductors/require-finite';
  * @example optimalLoad(0.1, 0.1, 100, 100) // ≈ 1.005 Ω
  */
 export function optimalLoad(R2: number, k: number, Q1: number, Q2: number): number {
-  requirePositive('R2', R2);
+  requirePositive('R2', R2, 'Ω');
   requireFinite('k', k);
   requirePositive('Q1', Q1);
   requirePositive('Q2', Q2);

@@ -1,4 +1,4 @@
-import { requirePositive } from '../conductors/require-finite';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * Quality factor of a coil at its operating frequency.
@@ -15,8 +15,8 @@ import { requirePositive } from '../conductors/require-finite';
  * @example qualityFactor(24e-6, 0.1, 85e3) // ≈ 128
  */
 export function qualityFactor(L: number, R: number, frequency: number): number {
-  requirePositive('L', L);
-  requirePositive('R', R);
-  requirePositive('frequency', frequency);
+  requirePositive('L', L, 'H');
+  requirePositive('R', R, 'Ω');
+  requirePositive('frequency', frequency, 'Hz');
   return (2 * Math.PI * frequency * L) / R;
 }

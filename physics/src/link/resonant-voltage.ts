@@ -1,4 +1,5 @@
-import { requireNonNegative, requirePositive } from '../conductors/require-finite';
+import { requireNonNegative } from '../guards/require-non-negative';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * Voltage across a coil (and, at resonance, across its series capacitor) at a given current.
@@ -17,8 +18,8 @@ import { requireNonNegative, requirePositive } from '../conductors/require-finit
  * @example resonantVoltage(100e-6, 85e3, 30) // ≈ 1602 V
  */
 export function resonantVoltage(L: number, frequency: number, I: number): number {
-  requirePositive('L', L);
-  requirePositive('frequency', frequency);
-  requireNonNegative('current', I);
+  requirePositive('L', L, 'H');
+  requirePositive('frequency', frequency, 'Hz');
+  requireNonNegative('current', I, 'A');
   return 2 * Math.PI * frequency * L * I;
 }

@@ -1,4 +1,4 @@
-import { requirePositive } from '../conductors/require-finite';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * Series compensation capacitor that resonates a coil at the operating frequency.
@@ -16,8 +16,8 @@ import { requirePositive } from '../conductors/require-finite';
  * @example seriesCompensation(100e-6, 85e3) // ≈ 35.1e-9 F
  */
 export function seriesCompensation(L: number, frequency: number): number {
-  requirePositive('L', L);
-  requirePositive('frequency', frequency);
+  requirePositive('L', L, 'H');
+  requirePositive('frequency', frequency, 'Hz');
   const w = 2 * Math.PI * frequency;
   return 1 / (w * w * L);
 }

@@ -1,4 +1,5 @@
-import { requireNonNegative, requirePositive } from '../conductors/require-finite';
+import { requireNonNegative } from '../guards/require-non-negative';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * Magnetic energy stored in a coil.
@@ -15,7 +16,7 @@ import { requireNonNegative, requirePositive } from '../conductors/require-finit
  * @example storedEnergy(100e-6, 30) // 0.045 J
  */
 export function storedEnergy(L: number, I: number): number {
-  requirePositive('L', L);
-  requireNonNegative('current', I);
+  requirePositive('L', L, 'H');
+  requireNonNegative('current', I, 'A');
   return 0.5 * L * I * I;
 }

@@ -1,4 +1,4 @@
-import { requirePositive } from '../conductors/require-finite';
+import { requirePositive } from '../guards/require-positive';
 
 /**
  * L/R time constant of a coil: how fast its current settles after a step of voltage.
@@ -14,7 +14,7 @@ import { requirePositive } from '../conductors/require-finite';
  * @example timeConstant(24e-6, 0.05) // 4.8e-4 s
  */
 export function timeConstant(L: number, R: number): number {
-  requirePositive('L', L);
-  requirePositive('R', R);
+  requirePositive('L', L, 'H');
+  requirePositive('R', R, 'Ω');
   return L / R;
 }

@@ -1,12 +1,12 @@
 // Pose rotation R = Rx(tiltX)·Ry(tiltY)·Rz(yaw). References: the right-hand-rule elementary
-// rotation matrices (e.g. H. Goldstein, Classical Mechanics, §4) and the pose contract
-// ("a positive tiltY leans its axis toward +x"); three.js (three@0.187, a general-purpose
-// library from the registry) as an outside implementation of the same composition.
+// rotation matrices (e.g. H. Goldstein, Classical Mechanics, §4) and the pose convention of
+// physics/README.md ("a positive tiltY leans its axis toward +x"); three.js (three@0.187, a
+// general-purpose library from the registry) as an outside implementation of the same composition.
 import fc from 'fast-check';
 import { Euler, Matrix4, Vector3 } from 'three';
 import { describe, expect, it } from 'vitest';
-import { expectNear } from '../coils/expect-near';
 import type { Vec3 } from '../filaments';
+import { expectNear } from '../testing/expect-near';
 import { parsePose } from './parse-pose';
 import { poseRotation, type Mat3 } from './pose-rotation';
 

@@ -1,9 +1,9 @@
 // Placing filaments by a pose. References: rigid-body motion (distances, radii and weights are
-// invariant; p' = R p + t) and the pose contract of the issue.
+// invariant; p' = R p + t) and the pose convention of physics/README.md.
 import { describe, expect, it } from 'vitest';
 import { coilFilaments } from '../coils/coil-filaments';
-import { expectNear } from '../coils/expect-near';
 import { parseCoil } from '../coils/parse-coil';
+import { expectNear } from '../testing/expect-near';
 import { transformFilaments } from './transform-filaments';
 
 const spiral = parseCoil({

@@ -1,19 +1,9 @@
-import ellipe from '@stdlib/math-base-special-ellipe';
-import ellipk from '@stdlib/math-base-special-ellipk';
 import { describe, expect, it } from 'vitest';
 import { parseCoil } from '../coils/parse-coil';
-import { expectWithin } from '../conductors/expect-within';
 import { preparePair } from '../inductance/prepare-pair';
+import { expectNear } from '../testing/expect-near';
+import { maxwellStdlib } from '../testing/maxwell-stdlib';
 import { runSweep } from './run-sweep';
-
-const MU0 = 4e-7 * Math.PI;
-
-/** Maxwell's coaxial-ring formula with @stdlib K and E (parameter m = k²), Treatise art. 701. */
-function maxwell(r1: number, r2: number, d: number): number {
-  const m = (4 * r1 * r2) / ((r1 + r2) ** 2 + d * d);
-  const k = Math.sqrt(m);
-  return MU0 * Math.sqrt(r1 * r2) * ((2 / k - k) * ellipk(m) - (2 / k) * ellipe(m));
-}
 
 describe('runSweep with the real preparePair', () => {
   it('matches Maxwell on the axis and keeps the map symmetric in x', async () => {
@@ -26,9 +16,14 @@ describe('runSweep with the real preparePair', () => {
       const row = Array.from(r.M.subarray(iz * 5, iz * 5 + 5));
       // On the axis: Maxwell's closed form; the kernels promise 1e-6 relative, 4π·1e-7 vs CODATA
       // mu0 adds 5e-10.
-      expectWithin(row[2], maxwell(0.02, 0.015, r.axes.z[iz]), 1e-6, `M at z = ${r.axes.z[iz]}`);
+      expectNear(
+        row[2],
+        maxwellStdlib(0.02, 0.015, r.axes.z[iz]),
+        1e-6,
+        `M at z = ${r.axes.z[iz]}`,
+      );
       // Parallel rings depend on |x| only (rotation symmetry about the common axis).
-      expectWithin(row[0], row[4], 1e-12, 'M(−x) = M(x)');
+      expectNear(row[0], row[4], 1e-12, 'M(−x) = M(x)');
       // M decays with gap at fixed offset.
       if (iz > 0) expect(row[2]).toBeLessThan(r.M[(iz - 1) * 5 + 2]);
     }

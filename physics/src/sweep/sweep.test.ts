@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { expectWithin } from '../conductors/expect-within';
+import { expectNear } from '../testing/expect-near';
 import { parseSweepSpec } from './parse-sweep-spec';
 import { runSweep } from './run-sweep';
 import { sweepChunks } from './sweep-chunks';
@@ -109,7 +109,7 @@ describe('runSweep', () => {
     g.poses.forEach((p, i) => {
       expect(r.M[i]).toBe(fakeM(p));
       // k = M / sqrt(L1 L2) = M / L here; one division, 1e-15 relative.
-      expectWithin(r.k[i], fakeM(p) / L, 1e-15, `k at ${i}`);
+      expectNear(r.k[i], fakeM(p) / L, 1e-15, `k at ${i}`);
     });
     expect(pair.calls).toEqual([7, 7, 7, 7, 7, 7, 7, 7, 4]);
     expect(progress.map((p) => p.done)).toEqual([7, 14, 21, 28, 35, 42, 49, 56, 60]);
@@ -183,7 +183,7 @@ describe('pose-dependent L2', () => {
     const r = await runSweep(pair, spec);
     sweepGrid(spec).poses.forEach((p, i) => {
       // k = M / sqrt(L1 L2(pose)): a few roundings, 1e-15.
-      expectWithin(r.k[i], fakeM(p) / Math.sqrt(L * pair.L2At(p)), 1e-15, `k at ${i}`);
+      expectNear(r.k[i], fakeM(p) / Math.sqrt(L * pair.L2At(p)), 1e-15, `k at ${i}`);
     });
   });
 });
