@@ -23,7 +23,7 @@ async function main(): Promise<void> {
     console.log('Demo workspace ready. Sign in as:');
     for (const s of signIns) {
       const note = s.passwordChanged ? ' (password changed since the demo was loaded)' : '';
-      console.log(`  ${s.role.padEnd(8)} ${s.email.padEnd(28)} ${s.password}${note}`);
+      console.log(`  ${s.role.padEnd(8)} ${s.email.padEnd(34)} ${s.password}${note}`);
     }
   }
 
@@ -69,8 +69,17 @@ async function main(): Promise<void> {
   process.on('SIGTERM', () => void shutdown('SIGTERM'));
 }
 
+function isAddressInUse(err: unknown): err is NodeJS.ErrnoException & { port: number } {
+  return (err as NodeJS.ErrnoException | undefined)?.code === 'EADDRINUSE';
+}
+
 main().catch((err: unknown) => {
   if (err instanceof ConfigError) console.error(err.message);
-  else console.error('Couplet failed to start:', err);
+  else if (isAddressInUse(err)) {
+    console.error(
+      `Couplet failed to start: port ${err.port} is taken by another program; stop it or ` +
+        'choose another port (PORT, or COUPLET_PORT for npm start).',
+    );
+  } else console.error('Couplet failed to start:', err);
   process.exit(1);
 });
