@@ -4,6 +4,7 @@
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser, screenshot } from './support/browser';
+import { openCapturedMail } from './support/captured-mail';
 
 const baseUrl = inject('baseUrl');
 const run = Date.now().toString(36);
@@ -70,12 +71,7 @@ describe('team invitation in the browser', () => {
 
     // The colleague, in a browser of their own, reads the mail the fake SMTP server captured.
     const colleaguePage = await (await browser.newContext()).newPage();
-    await colleaguePage.goto(`${baseUrl}/dev/mail`);
-    const mail = colleaguePage
-      .getByTestId('captured-mail')
-      .filter({ hasText: colleague.email })
-      .first();
-    await expect.poll(() => mail.count(), { timeout: 20_000, interval: 1000 }).toBe(1);
+    const mail = await openCapturedMail(colleaguePage, baseUrl, colleague.email);
     await screenshot(colleaguePage, 'dev-mail');
     await mail.locator('a[href*="/invitations/"]').first().click();
 
