@@ -81,7 +81,7 @@ export function createApp(deps: AppDeps): CreatedApp {
   const authenticator = new passport.Passport();
   authenticator.use(
     'jwt',
-    tokens.strategy((id) => auth.loadUser(id)),
+    tokens.strategy((subject) => auth.loadUser(subject)),
   );
   const guards: AccessGuards = {
     authenticate: (req, res, next) => {

@@ -7,9 +7,13 @@ import { tokenAudience, tokenIssuer } from './access-tokens';
 
 let t: TestApp;
 let user: TestUser;
+/** The session claims of the user's real token, so hand-signed tokens differ only as meant. */
+let session: { sid: string; ver: number };
 beforeAll(async () => {
   t = await createTestApp();
   user = await signUp(t.app, 'tokens');
+  const payload = jwt.decode(user.accessToken) as jwt.JwtPayload;
+  session = { sid: payload.sid as string, ver: payload.ver as number };
 });
 afterAll(async () => {
   await t.close();
@@ -22,7 +26,7 @@ function rightKey() {
 }
 
 function sign(payload: object, options: jwt.SignOptions = {}, key = rightKey()) {
-  return jwt.sign(payload, key, {
+  return jwt.sign({ ...session, ...payload }, key, {
     algorithm: 'HS256',
     issuer: tokenIssuer,
     audience: tokenAudience,
@@ -81,6 +85,20 @@ describe('access tokens', () => {
       'unauthenticated',
     ],
     ['that is not a JWT', () => 'not-a-token', 'unauthenticated'],
+    ['without sid', () => sign({ sid: undefined }, { expiresIn: 60 }), 'unauthenticated'],
+    ['without ver', () => sign({ ver: undefined }, { expiresIn: 60 }), 'unauthenticated'],
+    ['with a sid that is no uuid', () => sign({ sid: 'x' }, { expiresIn: 60 }), 'unauthenticated'],
+    [
+      'of a session that does not exist',
+      () => sign({ sid: '00000000-0000-4000-8000-000000000000' }, { expiresIn: 60 }),
+      'unauthenticated',
+    ],
+    [
+      'with a token version the user never had',
+      () => sign({ ver: session.ver + 1 }, { expiresIn: 60 }),
+      'unauthenticated',
+    ],
+    ['with a fractional ver', () => sign({ ver: 0.5 }, { expiresIn: 60 }), 'unauthenticated'],
   ];
   it.each(cases)('rejects a token %s with 401', async (_name, make, code) => {
     const res = await me(make());
@@ -99,6 +117,15 @@ describe('access tokens', () => {
     const payload = decoded.payload as jwt.JwtPayload;
     expect(decoded.header.alg).toBe('HS256');
     expect(payload.exp! - payload.iat!).toBe(900);
-    expect(payload).toMatchObject({ iss: tokenIssuer, aud: tokenAudience, sub: user.id });
+    expect(payload).toMatchObject({ iss: tokenIssuer, aud: tokenAudience, sub: user.id, ver: 0 });
+    expect(payload.sid).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/);
+  });
+
+  it('refuses a session of another user even with the right version', async () => {
+    const other = await signUp(t.app, 'tokens-other');
+    const otherSid = (jwt.decode(other.accessToken) as jwt.JwtPayload).sid as string;
+    const res = await me(sign({ sid: otherSid }, { expiresIn: 60 }));
+    expect(res.status).toBe(401);
+    expect(res.body.code).toBe('unauthenticated');
   });
 });

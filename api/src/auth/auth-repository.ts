@@ -1,4 +1,4 @@
-import { and, eq, gt, isNull, sql } from 'drizzle-orm';
+import { and, eq, exists, gt, isNull, sql } from 'drizzle-orm';
 import { passwordResets, refreshTokens, users, type UserRow } from '../../../schema/src/index';
 import type { Executor } from '../db/database';
 
@@ -18,6 +18,39 @@ export async function findUserById(ex: Executor, id: string): Promise<UserRow | 
   return rows[0];
 }
 
+/**
+ * The user of an access token, or undefined when the token no longer counts: its session (refresh
+ * family) was revoked, or the user's token version moved on. One query, because it runs on every
+ * authenticated request; the family index serves the EXISTS.
+ */
+export async function findUserForAccessToken(
+  ex: Executor,
+  subject: { userId: string; sessionId: string; tokenVersion: number },
+): Promise<{ id: string; email: string; displayName: string } | undefined> {
+  const liveSession = ex
+    .select({ one: sql`1` })
+    .from(refreshTokens)
+    .where(
+      and(
+        eq(refreshTokens.familyId, subject.sessionId),
+        eq(refreshTokens.userId, users.id),
+        isNull(refreshTokens.revokedAt),
+      ),
+    );
+  const rows = await ex
+    .select({ id: users.id, email: users.email, displayName: users.displayName })
+    .from(users)
+    .where(
+      and(
+        eq(users.id, subject.userId),
+        eq(users.tokenVersion, subject.tokenVersion),
+        exists(liveSession),
+      ),
+    )
+    .limit(1);
+  return rows[0];
+}
+
 /** Inserts a user; returns undefined when the e-mail is taken (no exception, no half state). */
 export async function insertUser(
   ex: Executor,
@@ -27,10 +60,18 @@ export async function insertUser(
   return rows[0];
 }
 
-export async function updatePasswordHash(ex: Executor, userId: string, hash: string) {
+/**
+ * Sets the password and raises the token version in one statement, so no access token issued
+ * before the new password can outlive it.
+ */
+export async function replacePasswordHash(ex: Executor, userId: string, hash: string) {
   await ex
     .update(users)
-    .set({ passwordHash: hash, updatedAt: new Date() })
+    .set({
+      passwordHash: hash,
+      tokenVersion: sql`${users.tokenVersion} + 1`,
+      updatedAt: new Date(),
+    })
     .where(eq(users.id, userId));
 }
 

@@ -72,7 +72,7 @@ export function authRoutes(deps: AuthRouteDeps): RouteDefinition[] {
     defineRoute({
       method: 'post',
       path: '/auth/sign-out',
-      summary: 'End the session of the refresh cookie',
+      summary: 'End the session of the refresh cookie; its access tokens stop working too',
       tag: 'auth',
       access: 'public',
       success: { status: 204, description: 'Signed out' },
@@ -100,7 +100,7 @@ export function authRoutes(deps: AuthRouteDeps): RouteDefinition[] {
     defineRoute({
       method: 'post',
       path: '/auth/reset-password',
-      summary: 'Set a new password with a reset token; ends every session',
+      summary: 'Set a new password with a reset token; ends every session and access token',
       tag: 'auth',
       access: 'public',
       body: resetPasswordRequest,

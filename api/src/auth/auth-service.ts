@@ -10,7 +10,7 @@ import {
 import { passwordResetMail } from '../mail/mail-templates';
 import { insertOutboxMessage } from '../mail/outbox-repository';
 import type { UserRow } from '../../../schema/src/index';
-import type { AccessTokens } from './access-tokens';
+import type { AccessTokens, AccessTokenSubject } from './access-tokens';
 import * as repo from './auth-repository';
 import type { SignInRequest, SignUpRequest, UserResponse } from './auth-dto';
 import { hashPassword, verifyAgainstDummy, verifyPassword } from './password-hasher';
@@ -100,6 +100,12 @@ export class AuthService {
     return session;
   }
 
+  /**
+   * Revokes the cookie's refresh family. Access tokens carry that family as `sid`, so they stop
+   * working too, on this device only. Per session rather than a per-user cut-off because the web
+   * client sends only the cookie to auth routes (never the bearer token), and because signing
+   * out of one browser should not end the others; checking `sid` costs no extra query.
+   */
   async signOut(refreshToken: string | undefined): Promise<void> {
     if (!refreshToken) return;
     const found = await repo.findRefreshToken(this.db, hashSecretToken(refreshToken));
@@ -132,7 +138,9 @@ export class AuthService {
       if (!userId) {
         throw new ValidationError('token: is invalid, used already or expired', 'token');
       }
-      await repo.updatePasswordHash(tx, userId, passwordHash);
+      // The new version refuses every access token issued before; revoking the families ends
+      // the refresh tokens (and, through `sid`, their access tokens as well).
+      await repo.replacePasswordHash(tx, userId, passwordHash);
       await repo.revokeAllForUser(tx, userId, now);
       const user = await repo.findUserById(tx, userId);
       await recordAudit(tx, {
@@ -144,9 +152,9 @@ export class AuthService {
     });
   }
 
-  async loadUser(id: string) {
-    const user = await repo.findUserById(this.db, id);
-    return user ? { id: user.id, email: user.email, displayName: user.displayName } : undefined;
+  /** The user of a verified access token whose session and token version are still current. */
+  async loadUser(subject: AccessTokenSubject) {
+    return repo.findUserForAccessToken(this.db, subject);
   }
 
   async getUser(id: string): Promise<UserResponse> {
@@ -167,7 +175,11 @@ export class AuthService {
       tokenHash: hash,
       expiresAt: new Date(Date.now() + refreshTokenLifetimeMs),
     });
-    const access = this.tokens.issue(user.id);
+    const access = this.tokens.issue({
+      userId: user.id,
+      sessionId: familyId,
+      tokenVersion: user.tokenVersion,
+    });
     return {
       user: toUserResponse(user),
       accessToken: access.token,

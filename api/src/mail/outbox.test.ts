@@ -41,6 +41,9 @@ function sender(port: number) {
     from: 'Couplet <no-reply@couplet.example>',
     logger: silent,
     baseBackoffMs: 0,
+    // Other test files queue mail in the same database at the same time; a batch far larger than
+    // they ever queue makes sure this test's own message is among the claimed ones.
+    batchSize: 10_000,
   });
 }
 
