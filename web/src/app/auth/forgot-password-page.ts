@@ -53,6 +53,8 @@ import { AuthSession } from './auth-session';
               <mat-error>{{ form.controls.email.getError('server') }}</mat-error>
             } @else if (form.controls.email.hasError('required')) {
               <mat-error>Enter the e-mail address of your account.</mat-error>
+            } @else if (form.controls.email.hasError('maxlength')) {
+              <mat-error>E-mail: at most 254 characters.</mat-error>
             } @else {
               <mat-error>E-mail: an address such as name&#64;example.com.</mat-error>
             }
