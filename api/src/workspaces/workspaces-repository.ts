@@ -56,15 +56,18 @@ export async function listWorkspacesOfUser(ex: Executor, userId: string) {
     .orderBy(asc(workspaces.name), asc(workspaces.id));
 }
 
+/** What a member row shows: the membership and the person behind it. */
+const memberColumns = {
+  userId: memberships.userId,
+  role: memberships.role,
+  joinedAt: memberships.createdAt,
+  email: users.email,
+  displayName: users.displayName,
+};
+
 export async function findMembership(ex: Executor, workspaceId: string, userId: string) {
   const rows = await ex
-    .select({
-      userId: memberships.userId,
-      role: memberships.role,
-      joinedAt: memberships.createdAt,
-      email: users.email,
-      displayName: users.displayName,
-    })
+    .select(memberColumns)
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)))
@@ -74,13 +77,7 @@ export async function findMembership(ex: Executor, workspaceId: string, userId: 
 
 export async function listMembers(ex: Executor, workspaceId: string) {
   return ex
-    .select({
-      userId: memberships.userId,
-      role: memberships.role,
-      joinedAt: memberships.createdAt,
-      email: users.email,
-      displayName: users.displayName,
-    })
+    .select(memberColumns)
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(eq(memberships.workspaceId, workspaceId))
