@@ -1,24 +1,16 @@
-import { HttpClient, provideHttpClient, withInterceptors } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Component } from '@angular/core';
+import { HttpClient, withInterceptors } from '@angular/common/http';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
-import { Router, provideRouter } from '@angular/router';
-import type { SessionResponse } from '../api-types';
+import { Router } from '@angular/router';
+import {
+  configurePageTest,
+  resetAndVerify,
+  signInAs,
+  testSession,
+  testUser,
+} from '../testing/page-test-bed';
 import { authInterceptor } from './auth-interceptor';
 import { AuthSession } from './auth-session';
-
-const session = (token: string): SessionResponse => ({
-  user: {
-    id: '0b7e5c1e-7d0a-4a53-9c53-2f0e1d7b9a01',
-    email: 'ines.ferreira@halden-robotics.example',
-    displayName: 'Inês Ferreira',
-    createdAt: '2026-11-30T09:00:00.000Z',
-  },
-  accessToken: token,
-  expiresAt: new Date(Date.now() + 15 * 60_000).toISOString(),
-});
-@Component({ selector: 'app-blank-auth-interceptor', template: '' })
-class Blank {}
 
 const unauthorized = { status: 401, statusText: 'Unauthorized' };
 const expiredBody = { code: 'token_expired', message: 'access token expired' };
@@ -30,22 +22,14 @@ describe('authInterceptor', () => {
   let router: Router;
 
   beforeEach(() => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(withInterceptors([authInterceptor])),
-        provideHttpClientTesting(),
-        provideRouter([{ path: '**', component: Blank }]),
-      ],
-    });
+    http = configurePageTest({ httpFeatures: [withInterceptors([authInterceptor])] });
     client = TestBed.inject(HttpClient);
-    http = TestBed.inject(HttpTestingController);
     auth = TestBed.inject(AuthSession);
     router = TestBed.inject(Router);
-    auth.signIn({ email: 'ines.ferreira@halden-robotics.example', password: 'x' }).subscribe();
-    http.expectOne('/api/v1/auth/sign-in').flush(session('token-a'));
+    signInAs(testUser, 'token-a');
   });
 
-  afterEach(() => http.verify());
+  afterEach(() => resetAndVerify(http));
 
   it('sends the access token to the API, and only there', () => {
     client.get('/api/v1/workspaces').subscribe();
@@ -66,7 +50,7 @@ describe('authInterceptor', () => {
     client.get('/api/v1/workspaces').subscribe((value) => (body = value));
     http.expectOne('/api/v1/workspaces').flush(expiredBody, unauthorized);
 
-    http.expectOne('/api/v1/auth/refresh').flush(session('token-b'));
+    http.expectOne('/api/v1/auth/refresh').flush(testSession('token-b'));
     const retry = http.expectOne('/api/v1/workspaces');
     expect(retry.request.headers.get('Authorization')).toBe('Bearer token-b');
     retry.flush({ items: [] });
@@ -83,7 +67,7 @@ describe('authInterceptor', () => {
     http.expectOne('/api/v1/me').flush(expiredBody, unauthorized);
 
     // One refresh only: the match throws if two were sent.
-    http.expectOne('/api/v1/auth/refresh').flush(session('token-b'));
+    http.expectOne('/api/v1/auth/refresh').flush(testSession('token-b'));
     http.expectOne('/api/v1/workspaces').flush({ items: [] });
     http.expectOne('/api/v1/me').flush({ ok: true });
     expect(results).toHaveLength(2);
@@ -109,7 +93,7 @@ describe('authInterceptor', () => {
     let status = 0;
     client.get('/api/v1/workspaces').subscribe({ error: (e) => (status = e.status) });
     http.expectOne('/api/v1/workspaces').flush(expiredBody, unauthorized);
-    http.expectOne('/api/v1/auth/refresh').flush(session('token-b'));
+    http.expectOne('/api/v1/auth/refresh').flush(testSession('token-b'));
     http.expectOne('/api/v1/workspaces').flush(expiredBody, unauthorized);
 
     http.expectNone('/api/v1/auth/refresh');

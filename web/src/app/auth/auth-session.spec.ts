@@ -1,19 +1,8 @@
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
-import type { SessionResponse } from '../api-types';
+import { resetAndVerify, signInAs, testSession } from '../testing/page-test-bed';
 import { AuthSession } from './auth-session';
-
-const session = (token: string, minutes = 15): SessionResponse => ({
-  user: {
-    id: '0b7e5c1e-7d0a-4a53-9c53-2f0e1d7b9a01',
-    email: 'ines.ferreira@halden-robotics.example',
-    displayName: 'Inês Ferreira',
-    createdAt: '2026-11-30T09:00:00.000Z',
-  },
-  accessToken: token,
-  expiresAt: new Date(Date.now() + minutes * 60_000).toISOString(),
-});
 
 describe('AuthSession', () => {
   let auth: AuthSession;
@@ -27,7 +16,7 @@ describe('AuthSession', () => {
     http = TestBed.inject(HttpTestingController);
   });
 
-  afterEach(() => http.verify());
+  afterEach(() => resetAndVerify(http));
 
   it('signs in with cookies allowed and keeps user, token and expiry', () => {
     let name = '';
@@ -37,7 +26,7 @@ describe('AuthSession', () => {
     const request = http.expectOne('/api/v1/auth/sign-in');
     expect(request.request.method).toBe('POST');
     expect(request.request.withCredentials).toBe(true);
-    request.flush(session('token-a'));
+    request.flush(testSession('token-a'));
 
     expect(name).toBe('Inês Ferreira');
     expect(auth.isSignedIn()).toBe(true);
@@ -55,18 +44,17 @@ describe('AuthSession', () => {
     // Exactly one request: a second use of the old refresh cookie would revoke the family.
     const first = http.expectOne('/api/v1/auth/refresh');
     expect(first.request.withCredentials).toBe(true);
-    first.flush(session('token-b'));
+    first.flush(testSession('token-b'));
     expect(seen).toEqual(['token-b', 'token-b', 'token-b']);
 
     auth.refresh().subscribe((s) => seen.push(s.accessToken));
-    http.expectOne('/api/v1/auth/refresh').flush(session('token-c'));
+    http.expectOne('/api/v1/auth/refresh').flush(testSession('token-c'));
     expect(seen.at(-1)).toBe('token-c');
     expect(auth.accessToken()).toBe('token-c');
   });
 
   it('forgets the session when the refresh is refused', () => {
-    auth.signIn({ email: 'a@b.example', password: 'x' }).subscribe();
-    http.expectOne('/api/v1/auth/sign-in').flush(session('token-a'));
+    signInAs();
 
     let failed = false;
     auth.refresh().subscribe({ error: () => (failed = true) });
@@ -83,7 +71,7 @@ describe('AuthSession', () => {
 
   it('restores a session from the refresh cookie, or resolves signed out', async () => {
     const restored = auth.restore();
-    http.expectOne('/api/v1/auth/refresh').flush(session('token-r'));
+    http.expectOne('/api/v1/auth/refresh').flush(testSession('token-r'));
     await restored;
     expect(auth.user()?.displayName).toBe('Inês Ferreira');
 
@@ -100,8 +88,7 @@ describe('AuthSession', () => {
   });
 
   it('signs out locally even when the server cannot be reached', () => {
-    auth.signIn({ email: 'a@b.example', password: 'x' }).subscribe();
-    http.expectOne('/api/v1/auth/sign-in').flush(session('token-a'));
+    signInAs();
 
     let done = false;
     auth.signOut().subscribe({ complete: () => (done = true) });
@@ -112,7 +99,7 @@ describe('AuthSession', () => {
 
   it('asks for a refresh when the token is within 30 s of expiry', () => {
     auth.signIn({ email: 'a@b.example', password: 'x' }).subscribe();
-    http.expectOne('/api/v1/auth/sign-in').flush(session('token-a', 0.25));
+    http.expectOne('/api/v1/auth/sign-in').flush(testSession('token-a', 0.25));
     expect(auth.needsRefresh()).toBe(true);
   });
 });

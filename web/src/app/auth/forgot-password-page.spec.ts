@@ -1,17 +1,12 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Component } from '@angular/core';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { HarnessLoader } from '@angular/cdk/testing';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
-import { provideRouter } from '@angular/router';
+import { configurePageTest, resetAndVerify } from '../testing/page-test-bed';
 import { ForgotPasswordPage } from './forgot-password-page';
-
-@Component({ selector: 'app-blank-forgot-password-page', template: '' })
-class Blank {}
 
 const url = '/api/v1/auth/forgot-password';
 const address = 'marta.okafor@halden-robotics.example';
@@ -32,24 +27,13 @@ describe('ForgotPasswordPage', () => {
   const send = () => loader.getHarness(MatButtonHarness.with({ text: 'Send reset link' }));
 
   beforeEach(async () => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter([{ path: '**', component: Blank }]),
-      ],
-    });
-    http = TestBed.inject(HttpTestingController);
+    http = configurePageTest();
     fixture = TestBed.createComponent(ForgotPasswordPage);
     loader = TestbedHarnessEnvironment.loader(fixture);
     await fixture.whenStable();
   });
 
-  afterEach(() => {
-    // Reset first: a failed verify would leave the module set up and fail every later test.
-    TestBed.resetTestingModule();
-    http.verify();
-  });
+  afterEach(() => resetAndVerify(http));
 
   it('asks for the address when the empty form is sent, and sends nothing', async () => {
     await (await send()).click();

@@ -1,17 +1,12 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Component } from '@angular/core';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { HarnessLoader } from '@angular/cdk/testing';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
-import { provideRouter } from '@angular/router';
+import { configurePageTest, resetAndVerify } from '../testing/page-test-bed';
 import { ResetPasswordPage } from './reset-password-page';
-
-@Component({ selector: 'app-blank-reset-password-page', template: '' })
-class Blank {}
 
 const url = '/api/v1/auth/reset-password';
 const token = 'rst_4f7c1a9e2b';
@@ -38,14 +33,7 @@ describe('ResetPasswordPage', () => {
   const save = () => loader.getHarness(MatButtonHarness.with({ text: 'Save new password' }));
 
   async function render(withToken: string | undefined): Promise<void> {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter([{ path: '**', component: Blank }]),
-      ],
-    });
-    http = TestBed.inject(HttpTestingController);
+    http = configurePageTest();
     fixture = TestBed.createComponent(ResetPasswordPage);
     if (withToken !== undefined) fixture.componentRef.setInput('token', withToken);
     loader = TestbedHarnessEnvironment.loader(fixture);
@@ -58,11 +46,7 @@ describe('ResetPasswordPage', () => {
     await (await save()).click();
   }
 
-  afterEach(() => {
-    // Reset first: a failed verify would leave the module set up and fail every later test.
-    TestBed.resetTestingModule();
-    http.verify();
-  });
+  afterEach(() => resetAndVerify(http));
 
   it('without a token, points to a new reset link and offers no form', async () => {
     await render(undefined);

@@ -1,17 +1,13 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Component } from '@angular/core';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { HarnessLoader } from '@angular/cdk/testing';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
-import { Router, provideRouter } from '@angular/router';
+import { Router } from '@angular/router';
+import { configurePageTest, resetAndVerify, testSession } from '../testing/page-test-bed';
 import { SignInPage } from './sign-in-page';
-
-@Component({ selector: 'app-blank-sign-in-page', template: '' })
-class Blank {}
 
 describe('SignInPage', () => {
   let fixture: ComponentFixture<SignInPage>;
@@ -27,20 +23,13 @@ describe('SignInPage', () => {
       ?.textContent?.trim() ?? '';
 
   beforeEach(async () => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter([{ path: '**', component: Blank }]),
-      ],
-    });
-    http = TestBed.inject(HttpTestingController);
+    http = configurePageTest();
     fixture = TestBed.createComponent(SignInPage);
     loader = TestbedHarnessEnvironment.loader(fixture);
     await fixture.whenStable();
   });
 
-  afterEach(() => http.verify());
+  afterEach(() => resetAndVerify(http));
 
   it('says what is missing when the empty form is sent, and sends nothing', async () => {
     await (await submit()).click();
@@ -97,16 +86,7 @@ describe('SignInPage', () => {
       email: 'ines.ferreira@halden-robotics.example',
       password: 'tx-coil-2026!',
     });
-    request.flush({
-      user: {
-        id: '0b7e5c1e-7d0a-4a53-9c53-2f0e1d7b9a01',
-        email: 'ines.ferreira@halden-robotics.example',
-        displayName: 'Inês Ferreira',
-        createdAt: '2026-11-30T09:00:00.000Z',
-      },
-      accessToken: 'token-a',
-      expiresAt: new Date(Date.now() + 900_000).toISOString(),
-    });
+    request.flush(testSession('token-a'));
     expect(navigate).toHaveBeenCalledWith('/invitations/tok-123');
   });
 });

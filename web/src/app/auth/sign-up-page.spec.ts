@@ -1,17 +1,12 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Component } from '@angular/core';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { HarnessLoader } from '@angular/cdk/testing';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
-import { provideRouter } from '@angular/router';
+import { configurePageTest, resetAndVerify } from '../testing/page-test-bed';
 import { SignUpPage } from './sign-up-page';
-
-@Component({ selector: 'app-blank-sign-up-page', template: '' })
-class Blank {}
 
 describe('SignUpPage', () => {
   let fixture: ComponentFixture<SignUpPage>;
@@ -26,20 +21,13 @@ describe('SignUpPage', () => {
     ).getTextErrors();
 
   beforeEach(async () => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter([{ path: '**', component: Blank }]),
-      ],
-    });
-    http = TestBed.inject(HttpTestingController);
+    http = configurePageTest();
     fixture = TestBed.createComponent(SignUpPage);
     loader = TestbedHarnessEnvironment.loader(fixture);
     await fixture.whenStable();
   });
 
-  afterEach(() => http.verify());
+  afterEach(() => resetAndVerify(http));
 
   it('states the allowed password length when the password is too short', async () => {
     const password = await input('password');

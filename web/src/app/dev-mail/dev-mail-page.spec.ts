@@ -1,38 +1,20 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Component } from '@angular/core';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { Router, provideRouter } from '@angular/router';
+import { Router } from '@angular/router';
+import { configurePageTest, resetAndVerify, settle } from '../testing/page-test-bed';
 import { DevMailPage } from './dev-mail-page';
-
-@Component({ selector: 'app-blank-dev-mail', template: '' })
-class Blank {}
 
 describe('DevMailPage', () => {
   let fixture: ComponentFixture<DevMailPage>;
   let http: HttpTestingController;
 
-  async function settle(): Promise<void> {
-    for (let i = 0; i < 3; i++) {
-      TestBed.tick();
-      await new Promise((resolve) => setTimeout(resolve));
-    }
-  }
-
   beforeEach(async () => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter([{ path: '**', component: Blank }]),
-      ],
-    });
-    http = TestBed.inject(HttpTestingController);
+    http = configurePageTest();
     fixture = TestBed.createComponent(DevMailPage);
     await settle();
   });
 
-  afterEach(() => http.verify());
+  afterEach(() => resetAndVerify(http));
 
   const page = (): HTMLElement => fixture.nativeElement as HTMLElement;
 

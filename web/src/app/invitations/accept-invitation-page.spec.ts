@@ -1,14 +1,15 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Component } from '@angular/core';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
-import { Router, provideRouter } from '@angular/router';
+import { Router } from '@angular/router';
 import type { InvitationPreviewResponse } from '../api-types';
-import { AuthSession } from '../auth/auth-session';
+import {
+  configurePageTest,
+  resetAndVerify,
+  settle,
+  signInAs,
+  testUser,
+} from '../testing/page-test-bed';
 import { AcceptInvitationPage } from './accept-invitation-page';
-
-@Component({ selector: 'app-blank-accept-invitation', template: '' })
-class Blank {}
 
 const token = 'Zq9-x_1token';
 const previewUrl = `/api/v1/invitations/${token}`;
@@ -20,42 +21,21 @@ const preview = (status: InvitationPreviewResponse['status']): InvitationPreview
   expiresAt: '2026-12-09T10:00:00.000Z',
   status,
 });
+/** The invitee, signed in under the address the invitation was sent to. */
+const tove = {
+  ...testUser,
+  id: 'a0000000-0000-4000-8000-000000000005',
+  email: 'tove@kestrel-labs.example',
+  displayName: 'Tove Kestrel',
+};
 
 describe('AcceptInvitationPage', () => {
   let fixture: ComponentFixture<AcceptInvitationPage>;
   let http: HttpTestingController;
 
-  async function settle(): Promise<void> {
-    for (let i = 0; i < 3; i++) {
-      TestBed.tick();
-      await new Promise((resolve) => setTimeout(resolve));
-    }
-  }
-
   async function render(signedIn: boolean): Promise<void> {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter([{ path: '**', component: Blank }]),
-      ],
-    });
-    http = TestBed.inject(HttpTestingController);
-    if (signedIn) {
-      TestBed.inject(AuthSession)
-        .signIn({ email: 'tove@kestrel-labs.example', password: 'x' })
-        .subscribe();
-      http.expectOne('/api/v1/auth/sign-in').flush({
-        user: {
-          id: 'a0000000-0000-4000-8000-000000000005',
-          email: 'tove@kestrel-labs.example',
-          displayName: 'Tove Kestrel',
-          createdAt: '2026-11-30T09:00:00.000Z',
-        },
-        accessToken: 't',
-        expiresAt: new Date(Date.now() + 900_000).toISOString(),
-      });
-    }
+    http = configurePageTest();
+    if (signedIn) signInAs(tove);
     fixture = TestBed.createComponent(AcceptInvitationPage);
     fixture.componentRef.setInput('token', token);
     await settle();
@@ -69,7 +49,7 @@ describe('AcceptInvitationPage', () => {
   const has = (testId: string): boolean =>
     (fixture.nativeElement as HTMLElement).querySelector(`[data-testid=${testId}]`) !== null;
 
-  afterEach(() => http.verify());
+  afterEach(() => resetAndVerify(http));
 
   it('shows workspace, role and inviter; sign-in and sign-up come back here', async () => {
     await render(false);

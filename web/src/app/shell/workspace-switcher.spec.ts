@@ -1,25 +1,21 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Component } from '@angular/core';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { HarnessLoader } from '@angular/cdk/testing';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import { MatMenuHarness } from '@angular/material/menu/testing';
-import { Router, provideRouter } from '@angular/router';
+import { Router } from '@angular/router';
 import type { WorkspaceResponse } from '../api-types';
-import { AuthSession } from '../auth/auth-session';
+import {
+  configurePageTest,
+  resetAndVerify,
+  settle,
+  signInAs,
+  testWorkspace,
+} from '../testing/page-test-bed';
 import { WorkspaceSwitcher } from './workspace-switcher';
 
-@Component({ selector: 'app-blank-workspace-switcher', template: '' })
-class Blank {}
-
 const list = '/api/v1/workspaces';
-const dockPad: WorkspaceResponse = {
-  id: '6f1c2d3e-4b5a-4c6d-8e7f-901a2b3c4d5e',
-  name: 'Halden dock pad',
-  role: 'owner',
-  createdAt: '2026-11-30T09:00:00.000Z',
-};
+const dockPad = testWorkspace;
 const scooter: WorkspaceResponse = {
   id: '7a2b3c4d-5e6f-4a7b-8c9d-0e1f2a3b4c5d',
   name: 'Kestrel scooter charger',
@@ -32,46 +28,15 @@ describe('WorkspaceSwitcher', () => {
   let loader: HarnessLoader;
   let http: HttpTestingController;
 
-  /** Lets resources issue their requests and take their answers. */
-  async function settle(): Promise<void> {
-    for (let i = 0; i < 3; i++) {
-      TestBed.tick();
-      await new Promise((resolve) => setTimeout(resolve));
-    }
-  }
-
   beforeEach(async () => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter([{ path: '**', component: Blank }]),
-      ],
-    });
-    http = TestBed.inject(HttpTestingController);
-    TestBed.inject(AuthSession)
-      .signIn({ email: 'ines@halden-robotics.example', password: 'x' })
-      .subscribe();
-    http.expectOne('/api/v1/auth/sign-in').flush({
-      user: {
-        id: 'a0000000-0000-4000-8000-000000000001',
-        email: 'ines@halden-robotics.example',
-        displayName: 'Inês Ferreira',
-        createdAt: '2026-11-30T09:00:00.000Z',
-      },
-      accessToken: 't',
-      expiresAt: new Date(Date.now() + 900_000).toISOString(),
-    });
+    http = configurePageTest();
+    signInAs();
     fixture = TestBed.createComponent(WorkspaceSwitcher);
     loader = TestbedHarnessEnvironment.loader(fixture);
     await settle();
   });
 
-  afterEach(() => {
-    // Reset first: a failed verify would leave the module set up and fail every later test.
-    TestBed.resetTestingModule();
-    http.verify();
-  });
+  afterEach(() => resetAndVerify(http));
 
   const trigger = (): HTMLButtonElement =>
     (fixture.nativeElement as HTMLElement).querySelector('[data-testid=workspace-switcher]')!;

@@ -1,24 +1,25 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Component } from '@angular/core';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { ComponentFixture, TestBed } from '@angular/core/testing';
 import { HarnessLoader } from '@angular/cdk/testing';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatSelectHarness } from '@angular/material/select/testing';
 import { MatRowHarness, MatTableHarness } from '@angular/material/table/testing';
-import { provideRouter } from '@angular/router';
 import type { InvitationResponse, MemberResponse, Role } from '../api-types';
-import { AuthSession } from '../auth/auth-session';
+import {
+  configurePageTest,
+  resetAndVerify,
+  settle,
+  signInAs,
+  testUser,
+  testWorkspace,
+} from '../testing/page-test-bed';
 import { MembersPage } from './members-page';
 import { WorkspaceContext } from './workspace-context';
 
-@Component({ selector: 'app-blank-members-page', template: '' })
-class Blank {}
-
-const workspaceId = '6f1c2d3e-4b5a-4c6d-8e7f-901a2b3c4d5e';
+const workspaceId = testWorkspace.id;
 const base = `/api/v1/workspaces/${workspaceId}`;
-const me = { id: 'a0000000-0000-4000-8000-000000000001', name: 'Inês Ferreira' };
+const me = { id: testUser.id, name: testUser.displayName };
 
 const member = (userId: string, displayName: string, role: Role): MemberResponse => ({
   userId,
@@ -52,48 +53,19 @@ describe('MembersPage', () => {
   let loader: HarnessLoader;
   let http: HttpTestingController;
 
-  /** Lets resources issue their requests and take their answers. */
-  async function settle(): Promise<void> {
-    for (let i = 0; i < 3; i++) {
-      TestBed.tick();
-      await new Promise((resolve) => setTimeout(resolve));
-    }
-  }
-
-  async function render(myRole: Role): Promise<void> {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter([{ path: '**', component: Blank }]),
-        WorkspaceContext,
-      ],
-    });
-    http = TestBed.inject(HttpTestingController);
-    TestBed.inject(AuthSession)
-      .signIn({ email: 'ines@halden-robotics.example', password: 'x' })
-      .subscribe();
-    http.expectOne('/api/v1/auth/sign-in').flush({
-      user: {
-        id: me.id,
-        email: 'ines@halden-robotics.example',
-        displayName: me.name,
-        createdAt: '2026-11-30T09:00:00.000Z',
-      },
-      accessToken: 't',
-      expiresAt: new Date(Date.now() + 900_000).toISOString(),
-    });
+  /** Opens the page on the workspace and answers its load: I hold `myRole` there. */
+  async function open(myRole: Role): Promise<void> {
     TestBed.inject(WorkspaceContext).bind(() => workspaceId);
-
     fixture = TestBed.createComponent(MembersPage);
     loader = TestbedHarnessEnvironment.loader(fixture);
     await settle();
-    http.expectOne(base).flush({
-      id: workspaceId,
-      name: 'Halden dock pad',
-      role: myRole,
-      createdAt: '2026-11-30T09:00:00.000Z',
-    });
+    http.expectOne(base).flush({ ...testWorkspace, role: myRole });
+  }
+
+  async function render(myRole: Role): Promise<void> {
+    http = configurePageTest({ providers: [WorkspaceContext] });
+    signInAs();
+    await open(myRole);
     http.expectOne(`${base}/members`).flush({ items: members(myRole) });
     // The toolbar's workspace list loads once someone is signed in.
     http.expectOne('/api/v1/workspaces').flush({ items: [] });
@@ -115,7 +87,7 @@ describe('MembersPage', () => {
     return Promise.all(rows.map(async (row) => (await row.getCellTextByIndex())[0]));
   };
 
-  afterEach(() => http.verify());
+  afterEach(() => resetAndVerify(http));
 
   it('gives the owner the invite form, role selects, remove and revoke', async () => {
     await render('owner');
@@ -178,25 +150,8 @@ describe('MembersPage', () => {
   });
 
   it('offers a retry when the members cannot be loaded', async () => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter([{ path: '**', component: Blank }]),
-        WorkspaceContext,
-      ],
-    });
-    http = TestBed.inject(HttpTestingController);
-    TestBed.inject(WorkspaceContext).bind(() => workspaceId);
-    fixture = TestBed.createComponent(MembersPage);
-    loader = TestbedHarnessEnvironment.loader(fixture);
-    await settle();
-    http.expectOne(base).flush({
-      id: workspaceId,
-      name: 'Halden dock pad',
-      role: 'editor',
-      createdAt: '2026-11-30T09:00:00.000Z',
-    });
+    http = configurePageTest({ providers: [WorkspaceContext] });
+    await open('editor');
     http
       .expectOne(`${base}/members`)
       .flush(

@@ -1,5 +1,4 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { EnvironmentInjector, runInInjectionContext } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import {
@@ -7,9 +6,9 @@ import {
   RouterStateSnapshot,
   UrlTree,
   convertToParamMap,
-  provideRouter,
 } from '@angular/router';
 import { Observable, firstValueFrom, isObservable, of } from 'rxjs';
+import { configurePageTest, resetAndVerify } from '../testing/page-test-bed';
 import { ownerGuard } from './owner-guard';
 
 const workspaceId = '6f1c2d3e-4b5a-4c6d-8e7f-901a2b3c4d5e';
@@ -18,13 +17,10 @@ describe('ownerGuard', () => {
   let http: HttpTestingController;
 
   beforeEach(() => {
-    TestBed.configureTestingModule({
-      providers: [provideHttpClient(), provideHttpClientTesting(), provideRouter([])],
-    });
-    http = TestBed.inject(HttpTestingController);
+    http = configurePageTest({ routes: [] });
   });
 
-  afterEach(() => http.verify());
+  afterEach(() => resetAndVerify(http));
 
   function run(): Promise<boolean | UrlTree> {
     const route = { paramMap: convertToParamMap({ workspaceId }) } as ActivatedRouteSnapshot;

@@ -1,71 +1,46 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { Component } from '@angular/core';
-import { TestBed } from '@angular/core/testing';
-import { provideRouter, withComponentInputBinding, withRouterConfig } from '@angular/router';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { RouterTestingHarness } from '@angular/router/testing';
 import type { Role, WorkspaceResponse } from '../api-types';
+import {
+  BlankPage,
+  configurePageTest,
+  resetAndVerify,
+  settle,
+  testWorkspace,
+} from '../testing/page-test-bed';
 import { WorkspaceHomePage } from './workspace-home-page';
 import { WorkspaceLayout } from './workspace-layout';
 
-@Component({ selector: 'app-blank-workspace-home-page', template: '' })
-class Blank {}
-
-const workspaceId = '6f1c2d3e-4b5a-4c6d-8e7f-901a2b3c4d5e';
+const workspaceId = testWorkspace.id;
 const base = `/api/v1/workspaces/${workspaceId}`;
-const workspace = (role: Role): WorkspaceResponse => ({
-  id: workspaceId,
-  name: 'Halden dock pad',
-  role,
-  createdAt: '2026-11-30T09:00:00.000Z',
-});
+const workspace = (role: Role): WorkspaceResponse => ({ ...testWorkspace, role });
 
 /** The home page inside its workspace layout, which loads the workspace for every page in it. */
 describe('WorkspaceHomePage', () => {
   let harness: RouterTestingHarness;
   let http: HttpTestingController;
 
-  /** Lets resources issue their requests and take their answers. */
-  async function settle(): Promise<void> {
-    for (let i = 0; i < 3; i++) {
-      TestBed.tick();
-      await new Promise((resolve) => setTimeout(resolve));
-    }
-  }
-
   beforeEach(async () => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter(
-          [
-            {
-              path: 'w/:workspaceId',
-              component: WorkspaceLayout,
-              children: [
-                { path: '', component: WorkspaceHomePage },
-                { path: '**', component: Blank },
-              ],
-            },
-            { path: '**', component: Blank },
+    http = configurePageTest({
+      routes: [
+        {
+          path: 'w/:workspaceId',
+          component: WorkspaceLayout,
+          children: [
+            { path: '', component: WorkspaceHomePage },
+            { path: '**', component: BlankPage },
           ],
-          withComponentInputBinding(),
-          withRouterConfig({ paramsInheritanceStrategy: 'always' }),
-        ),
+        },
+        { path: '**', component: BlankPage },
       ],
+      routeInputs: true,
     });
-    http = TestBed.inject(HttpTestingController);
     harness = await RouterTestingHarness.create();
     await harness.navigateByUrl(`/w/${workspaceId}`);
     await settle();
   });
 
-  afterEach(() => {
-    // Reset first: a failed verify would leave the module set up and fail every later test.
-    TestBed.resetTestingModule();
-    http.verify();
-  });
+  afterEach(() => resetAndVerify(http));
 
   const page = (): HTMLElement => harness.fixture.nativeElement as HTMLElement;
   const text = (selector: string): string =>

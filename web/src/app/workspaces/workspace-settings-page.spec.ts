@@ -1,27 +1,25 @@
-import { provideHttpClient } from '@angular/common/http';
-import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
-import { TestBed } from '@angular/core/testing';
+import { HttpTestingController } from '@angular/common/http/testing';
 import { HarnessLoader } from '@angular/cdk/testing';
 import { TestbedHarnessEnvironment } from '@angular/cdk/testing/testbed';
 import { MatButtonHarness } from '@angular/material/button/testing';
 import { MatFormFieldHarness } from '@angular/material/form-field/testing';
 import { MatInputHarness } from '@angular/material/input/testing';
 import { MatSnackBarHarness } from '@angular/material/snack-bar/testing';
-import { provideRouter, withComponentInputBinding, withRouterConfig } from '@angular/router';
 import { RouterTestingHarness } from '@angular/router/testing';
 import type { AuditEventResponse, WorkspaceResponse } from '../api-types';
-import { AuthSession } from '../auth/auth-session';
+import {
+  configurePageTest,
+  resetAndVerify,
+  settle,
+  signInAs,
+  testWorkspace,
+} from '../testing/page-test-bed';
 import { WorkspaceLayout } from './workspace-layout';
 import { WorkspaceSettingsPage } from './workspace-settings-page';
 
-const workspaceId = '6f1c2d3e-4b5a-4c6d-8e7f-901a2b3c4d5e';
+const workspace: WorkspaceResponse = testWorkspace;
+const workspaceId = workspace.id;
 const base = `/api/v1/workspaces/${workspaceId}`;
-const workspace: WorkspaceResponse = {
-  id: workspaceId,
-  name: 'Halden dock pad',
-  role: 'owner',
-  createdAt: '2026-11-30T09:00:00.000Z',
-};
 const events: AuditEventResponse[] = [
   {
     id: 'c0000000-0000-4000-8000-000000000002',
@@ -46,47 +44,19 @@ describe('WorkspaceSettingsPage', () => {
   let loader: HarnessLoader;
   let http: HttpTestingController;
 
-  /** Lets resources issue their requests and take their answers. */
-  async function settle(): Promise<void> {
-    for (let i = 0; i < 3; i++) {
-      TestBed.tick();
-      await new Promise((resolve) => setTimeout(resolve));
-    }
-  }
-
   /** Opens the page inside its workspace layout, as the router does; the activity stays open. */
   beforeEach(async () => {
-    TestBed.configureTestingModule({
-      providers: [
-        provideHttpClient(),
-        provideHttpClientTesting(),
-        provideRouter(
-          [
-            {
-              path: 'w/:workspaceId',
-              component: WorkspaceLayout,
-              children: [{ path: 'settings', component: WorkspaceSettingsPage }],
-            },
-          ],
-          withComponentInputBinding(),
-          withRouterConfig({ paramsInheritanceStrategy: 'always' }),
-        ),
+    http = configurePageTest({
+      routes: [
+        {
+          path: 'w/:workspaceId',
+          component: WorkspaceLayout,
+          children: [{ path: 'settings', component: WorkspaceSettingsPage }],
+        },
       ],
+      routeInputs: true,
     });
-    http = TestBed.inject(HttpTestingController);
-    TestBed.inject(AuthSession)
-      .signIn({ email: 'ines@halden-robotics.example', password: 'x' })
-      .subscribe();
-    http.expectOne('/api/v1/auth/sign-in').flush({
-      user: {
-        id: 'a0000000-0000-4000-8000-000000000001',
-        email: 'ines@halden-robotics.example',
-        displayName: 'Inês Ferreira',
-        createdAt: '2026-11-30T09:00:00.000Z',
-      },
-      accessToken: 't',
-      expiresAt: new Date(Date.now() + 900_000).toISOString(),
-    });
+    signInAs();
     harness = await RouterTestingHarness.create();
     await harness.navigateByUrl(`/w/${workspaceId}/settings`);
     loader = TestbedHarnessEnvironment.loader(harness.fixture);
@@ -97,11 +67,7 @@ describe('WorkspaceSettingsPage', () => {
     http.expectOne('/api/v1/workspaces').flush({ items: [workspace] });
   });
 
-  afterEach(() => {
-    // Reset first: a failed verify would leave the module set up and fail every later test.
-    TestBed.resetTestingModule();
-    http.verify();
-  });
+  afterEach(() => resetAndVerify(http));
 
   const page = (): HTMLElement => harness.routeNativeElement ?? document.body;
   const text = (testId: string): string =>
