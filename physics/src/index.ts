@@ -7,6 +7,8 @@
  * Bessel node sets, packed segments), which serve the evaluators below and may change with them.
  */
 
+export { ENGINE_VERSION } from './engine/engine-version';
+
 // Coil descriptions: schemas, validation, filaments.
 export {
   backingSchema,

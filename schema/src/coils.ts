@@ -13,11 +13,14 @@ import {
 import { users } from './users';
 import { workspaces } from './workspaces';
 
+/** The physics engine's coil kinds (physics/src/coils/coil-schema.ts), spelt the same way. */
 export const coilKind = pgEnum('coil_kind', [
-  'planar_spiral',
-  'rectangular_spiral',
+  'ring',
+  'rings',
+  'circular-spiral',
+  'rectangular-spiral',
   'solenoid',
-  'custom_path',
+  'path',
 ]);
 
 /**
@@ -34,9 +37,14 @@ export const coils = pgTable(
       .references(() => workspaces.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
     kind: coilKind('kind').notNull(),
+    description: text('description').notNull().default(''),
     spec: jsonb('spec').$type<Record<string, unknown>>().notNull(),
+    /** Frequency the library's figures (R_ac, Q) are given at, Hz. */
     operatingFrequencyHz: doublePrecision('operating_frequency_hz'),
+    /** Current the stored energy is given at, A. */
+    ratedCurrentA: doublePrecision('rated_current_a'),
     selfInductanceH: doublePrecision('self_inductance_h'),
+    dcResistanceOhm: doublePrecision('dc_resistance_ohm'),
     acResistanceOhm: doublePrecision('ac_resistance_ohm'),
     qualityFactor: doublePrecision('quality_factor'),
     wireLengthM: doublePrecision('wire_length_m'),

@@ -16,6 +16,8 @@ export const studyRevisions = pgTable(
       .references(() => studies.id, { onDelete: 'cascade' }),
     /** 1, 2, 3 … within the study. */
     number: integer('number').notNull(),
+    /** What changed, in the author's words. */
+    summary: text('summary').notNull().default(''),
     inputs: jsonb('inputs').$type<Record<string, unknown>>().notNull(),
     coilSnapshots: jsonb('coil_snapshots').$type<Record<string, unknown>>().notNull(),
     engineVersion: text('engine_version').notNull(),

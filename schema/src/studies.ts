@@ -28,8 +28,18 @@ export const studies = pgTable(
     txCoilId: uuid('tx_coil_id').references(() => coils.id, { onDelete: 'restrict' }),
     rxCoilId: uuid('rx_coil_id').references(() => coils.id, { onDelete: 'restrict' }),
     operatingFrequencyHz: doublePrecision('operating_frequency_hz'),
+    /** Tx coil current (rms), A. */
+    txCurrentA: doublePrecision('tx_current_a'),
+    /** Which figure the threshold bounds: 'k' (coupling) or 'eta' (maximum link efficiency). */
+    thresholdKind: text('threshold_kind').notNull().default('k'),
     /** Lowest coupling coefficient the power stage works with (dimensionless). */
     minCouplingK: doublePrecision('min_coupling_k'),
+    /** Lowest maximum link efficiency the design accepts, 0 … 1 (when thresholdKind = 'eta'). */
+    minEfficiency: doublePrecision('min_efficiency'),
+    compensation: text('compensation').notNull().default('series-series'),
+    notes: text('notes').notNull().default(''),
+    /** Nominal pose of the Rx in the Tx frame { x, y, z, tiltX, tiltY }, metres and degrees. */
+    nominalPose: jsonb('nominal_pose').$type<Record<string, number>>().notNull().default({}),
     settings: jsonb('settings').$type<Record<string, unknown>>().notNull().default({}),
     version: integer('version').notNull().default(1),
     createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),

@@ -30,6 +30,10 @@ export const sweepRuns = pgTable(
       .notNull()
       .references(() => studies.id, { onDelete: 'cascade' }),
     revisionId: uuid('revision_id').references(() => studyRevisions.id, { onDelete: 'set null' }),
+    /** 'xy-map', 'gap', 'tilt' or 'xy-stack'. */
+    kind: text('kind').notNull().default('xy-map'),
+    /** Hash of the study inputs and coil specs the run computed from (stale once they change). */
+    inputsHash: text('inputs_hash').notNull().default(''),
     spec: jsonb('spec').$type<Record<string, unknown>>().notNull(),
     status: sweepStatus('status').notNull().default('queued'),
     pointsTotal: integer('points_total').notNull().default(0),
@@ -43,6 +47,8 @@ export const sweepRuns = pgTable(
     finishedAt: timestamp('finished_at', { withTimezone: true }),
     computeTimeS: doublePrecision('compute_time_s'),
     error: text('error'),
+    /** Set when a user asks to cancel; the worker stops at its next chunk. */
+    cancelRequestedAt: timestamp('cancel_requested_at', { withTimezone: true }),
     result: jsonb('result').$type<Record<string, unknown>>(),
     requestedBy: uuid('requested_by').references(() => users.id, { onDelete: 'set null' }),
   },

@@ -67,6 +67,26 @@ export class ConflictError extends AppError {
   }
 }
 
+/** A delete refused because other records still use the thing (a coil used by studies). */
+export class InUseError extends AppError {
+  constructor(
+    message: string,
+    readonly usedBy: { id: string; name: string }[],
+  ) {
+    super(409, 'in_use', message);
+  }
+}
+
+/** An update sent with a version older than the stored one (optimistic concurrency). */
+export class StaleVersionError extends AppError {
+  constructor(
+    message: string,
+    readonly currentVersion: number,
+  ) {
+    super(409, 'stale_version', message, 'version');
+  }
+}
+
 export class LastOwnerError extends AppError {
   constructor() {
     super(409, 'last_owner', 'A workspace must keep at least one owner');

@@ -1,6 +1,13 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Logger } from 'pino';
-import { AppError, MalformedJsonError, NotFoundError, PayloadTooLargeError } from './app-errors';
+import {
+  AppError,
+  InUseError,
+  MalformedJsonError,
+  NotFoundError,
+  PayloadTooLargeError,
+  StaleVersionError,
+} from './app-errors';
 import type { ProblemResponse } from './problem-dto';
 
 const titles: Record<number, string> = {
@@ -23,6 +30,8 @@ function problemOf(error: AppError): ProblemResponse {
     message: error.message,
   };
   if (error.field !== undefined) body.field = error.field;
+  if (error instanceof InUseError) body.usedBy = error.usedBy;
+  if (error instanceof StaleVersionError) body.currentVersion = error.currentVersion;
   return body;
 }
 

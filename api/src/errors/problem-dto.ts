@@ -13,6 +13,8 @@ export const problemCodes = [
   'not_found',
   'conflict',
   'last_owner',
+  'in_use',
+  'stale_version',
   'rate_limited',
   'internal',
 ] as const;
@@ -26,5 +28,9 @@ export const problemResponse = z.object({
   message: z.string(),
   /** Dotted path of the one input field at fault, when there is one. */
   field: z.string().optional(),
+  /** For `in_use`: the studies that hold on to the thing that could not be deleted. */
+  usedBy: z.array(z.object({ id: z.string(), name: z.string() })).optional(),
+  /** For `stale_version`: the version now stored (the client sent an older one). */
+  currentVersion: z.number().int().optional(),
 });
 export type ProblemResponse = z.infer<typeof problemResponse>;
