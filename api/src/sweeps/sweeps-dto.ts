@@ -128,3 +128,16 @@ export interface SweepProgressEvent {
   /** Estimated from the rate so far; null before the first chunk. */
   remainingS: number | null;
 }
+
+/**
+ * What a run computes from, frozen into `sweep_runs.spec` when it is queued: the request, the
+ * study's compute inputs, both coil specs and the engine version. Workers read only this.
+ */
+export interface FrozenSweepSpec {
+  kind: SweepKind;
+  grid: SweepSpec;
+  inputs: import('../studies/study-inputs-hash').StudyComputeInputs;
+  coilNames: { tx: string; rx: string };
+  engineVersion: string;
+  inputsHash: string;
+}
