@@ -11,7 +11,15 @@ export type AuditAction =
   | 'invitation.accepted'
   | 'invitation.revoked'
   | 'member.role_changed'
-  | 'member.removed';
+  | 'member.removed'
+  | 'coil.created'
+  | 'coil.updated'
+  | 'coil.duplicated'
+  | 'coil.deleted'
+  | 'study.created'
+  | 'study.updated'
+  | 'study.deleted'
+  | 'revision.created';
 
 export interface NewAuditEvent {
   workspaceId: string | null;

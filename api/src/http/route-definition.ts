@@ -20,7 +20,7 @@ export interface RouteDefinition<
   Q extends Schema = Schema,
   B extends Schema = Schema,
 > {
-  method: 'get' | 'post' | 'patch' | 'delete';
+  method: 'get' | 'post' | 'put' | 'patch' | 'delete';
   /** Express path below /api/v1, e.g. `/workspaces/:workspaceId`. */
   path: string;
   summary: string;
