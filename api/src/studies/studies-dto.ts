@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { Coil } from '../../../physics/src/index';
-import type { CoilKind, CoilResponse } from '../coils/coils-dto';
+import { coilFiguresResponse, coilKindSchema, type CoilResponse } from '../coils/coils-dto';
+import type { SweepRunResponse } from '../sweeps/sweeps-dto';
 
 // Request and response shapes of the study and revision routes (contract of issue 4).
 
@@ -101,57 +102,92 @@ export const updateStudyRequest = z
   .strict();
 export type UpdateStudyRequest = z.input<typeof updateStudyRequest>;
 
-/** A coil as a study sees it: the library's current spec (or the revision's frozen copy). */
-export interface StudyCoil {
-  id: string;
-  name: string;
-  kind: CoilKind;
-  spec: Coil;
-  version: number;
-  figures: CoilResponse['figures'];
-}
+const isoTime = z.iso.datetime({ offset: true });
+const person = z.object({ userId: uuid, displayName: z.string() }).nullable();
+// Response shapes restate the stored values without the request's limits: a limit tightened
+// later must not turn an existing study into a 500.
+const thresholdOut = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('k'), value: z.number() }),
+  z.object({ kind: z.literal('eta'), value: z.number() }),
+]);
+const poseOut = z.object({
+  x: z.number(),
+  y: z.number(),
+  z: z.number(),
+  tiltX: z.number(),
+  tiltY: z.number(),
+});
 
-export interface StudyResponse {
-  id: string;
-  workspaceId: string;
-  name: string;
-  txCoil: StudyCoil;
-  rxCoil: StudyCoil;
-  frequencyHz: number;
-  txCurrentA: number;
-  threshold: Threshold;
-  compensation: Compensation;
-  notes: string;
-  nominalPose: StudyPose;
+/** A coil as a study sees it: the library's current spec (or the revision's frozen copy). */
+export const studyCoil = z.object({
+  id: uuid,
+  name: z.string(),
+  kind: coilKindSchema,
+  spec: z.record(z.string(), z.unknown()),
+  version: z.number().int(),
+  figures: coilFiguresResponse,
+});
+/** The spec passed the engine's schema on its way into the library, so it is a `Coil`. */
+export type StudyCoil = Omit<z.infer<typeof studyCoil>, 'spec' | 'figures'> & {
+  spec: Coil;
+  figures: CoilResponse['figures'];
+};
+
+export const studyResponse = z.object({
+  id: uuid,
+  workspaceId: uuid,
+  name: z.string(),
+  txCoil: studyCoil,
+  rxCoil: studyCoil,
+  frequencyHz: z.number(),
+  txCurrentA: z.number(),
+  threshold: thresholdOut,
+  compensation: compensationSchema,
+  notes: z.string(),
+  nominalPose: poseOut,
   /**
    * sha256 of the canonical JSON of the inputs and both coil specs: a sweep run or revision with
    * another hash was computed from something else (shown as stale).
    */
-  inputsHash: string;
-  version: number;
-  latestRevision: { id: string; number: number; createdAt: string } | null;
-  createdBy: { userId: string; displayName: string } | null;
-  updatedBy: { userId: string; displayName: string } | null;
-  createdAt: string;
-  updatedAt: string;
-}
+  inputsHash: z.string(),
+  version: z.number().int(),
+  latestRevision: z.object({ id: uuid, number: z.number().int(), createdAt: isoTime }).nullable(),
+  createdBy: person,
+  updatedBy: person,
+  createdAt: isoTime,
+  updatedAt: isoTime,
+});
+export type StudyResponse = Omit<z.infer<typeof studyResponse>, 'txCoil' | 'rxCoil'> & {
+  txCoil: StudyCoil;
+  rxCoil: StudyCoil;
+};
 
-export interface StudySummaryResponse {
-  id: string;
-  name: string;
-  txCoil: { id: string; name: string };
-  rxCoil: { id: string; name: string };
-  frequencyHz: number;
-  threshold: Threshold;
-  revisionCount: number;
+export const studySummaryResponse = z.object({
+  id: uuid,
+  name: z.string(),
+  txCoil: z.object({ id: uuid, name: z.string() }),
+  rxCoil: z.object({ id: uuid, name: z.string() }),
+  frequencyHz: z.number(),
+  threshold: thresholdOut,
+  revisionCount: z.number().int(),
   /** Status of the newest sweep run, if any. */
-  lastRun: { id: string; kind: string; status: string; finishedAt: string | null } | null;
-  updatedAt: string;
-}
+  lastRun: z
+    .object({ id: uuid, kind: z.string(), status: z.string(), finishedAt: isoTime.nullable() })
+    .nullable(),
+  updatedAt: isoTime,
+});
+export type StudySummaryResponse = z.infer<typeof studySummaryResponse>;
 
-export interface ListStudiesResponse {
-  items: StudySummaryResponse[];
-}
+export const listStudiesResponse = z.object({ items: z.array(studySummaryResponse) });
+export type ListStudiesResponse = z.infer<typeof listStudiesResponse>;
+
+/**
+ * `DELETE …/studies/:studyId?version=N`: the version is optional; when given it must be current.
+ * A study with revisions is deleted by an owner only (its reviewed work goes with it).
+ */
+export const deleteStudyQuery = z
+  .object({ version: z.coerce.number().int().positive({ message: 'must be ≥ 1' }).optional() })
+  .strict();
 
 export const createRevisionRequest = z
   .object({
@@ -162,34 +198,52 @@ export const createRevisionRequest = z
   .strict();
 export type CreateRevisionRequest = z.input<typeof createRevisionRequest>;
 
-export interface RevisionSummaryResponse {
-  id: string;
-  number: number;
-  summary: string;
-  engineVersion: string;
-  inputsHash: string;
+export const revisionSummaryResponse = z.object({
+  id: uuid,
+  number: z.number().int(),
+  summary: z.string(),
+  engineVersion: z.string(),
+  inputsHash: z.string(),
   /** Sweep kinds whose results the revision holds. */
-  resultKinds: string[];
-  createdBy: { userId: string; displayName: string } | null;
-  createdAt: string;
-}
+  resultKinds: z.array(z.string()),
+  createdBy: person,
+  createdAt: isoTime,
+});
+export type RevisionSummaryResponse = z.infer<typeof revisionSummaryResponse>;
 
-export interface RevisionResponse extends RevisionSummaryResponse {
+export const revisionResponse = revisionSummaryResponse.extend({
   /** The study's inputs as they were (the StudyResponse fields without ids and times). */
-  inputs: {
-    name: string;
-    frequencyHz: number;
-    txCurrentA: number;
-    threshold: Threshold;
-    compensation: Compensation;
-    notes: string;
-    nominalPose: StudyPose;
-  };
-  coilSnapshots: { tx: StudyCoil; rx: StudyCoil };
+  inputs: z.object({
+    name: z.string(),
+    frequencyHz: z.number(),
+    txCurrentA: z.number(),
+    threshold: thresholdOut,
+    compensation: compensationSchema,
+    notes: z.string(),
+    nominalPose: poseOut,
+  }),
+  coilSnapshots: z.object({ tx: studyCoil, rx: studyCoil }),
   /** The succeeded sweep runs with the revision's inputs hash, newest of each kind, frozen. */
-  results: { runs: import('../sweeps/sweeps-dto').SweepRunResponse[] };
-}
+  results: z.object({ runs: z.array(z.record(z.string(), z.unknown())) }),
+});
+export type RevisionResponse = Omit<
+  z.infer<typeof revisionResponse>,
+  'coilSnapshots' | 'results'
+> & {
+  coilSnapshots: { tx: StudyCoil; rx: StudyCoil };
+  results: { runs: SweepRunResponse[] };
+};
 
-export interface ListRevisionsResponse {
-  items: RevisionSummaryResponse[];
+export const listRevisionsResponse = z.object({ items: z.array(revisionSummaryResponse) });
+export type ListRevisionsResponse = z.infer<typeof listRevisionsResponse>;
+
+/** The inputs that decide every number a study computes (names and notes do not). */
+export interface StudyComputeInputs {
+  frequencyHz: number;
+  txCurrentA: number;
+  threshold: Threshold;
+  compensation: Compensation;
+  nominalPose: StudyPose;
+  tx: Coil;
+  rx: Coil;
 }

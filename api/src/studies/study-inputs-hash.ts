@@ -1,17 +1,7 @@
 import { createHash } from 'node:crypto';
-import type { Coil } from '../../../physics/src/index';
-import type { Compensation, StudyPose, Threshold } from './studies-dto';
+import type { StudyComputeInputs } from './studies-dto';
 
-/** The inputs that decide every number a study computes (names and notes do not). */
-export interface StudyComputeInputs {
-  frequencyHz: number;
-  txCurrentA: number;
-  threshold: Threshold;
-  compensation: Compensation;
-  nominalPose: StudyPose;
-  tx: Coil;
-  rx: Coil;
-}
+export type { StudyComputeInputs };
 
 /**
  * sha256 (hex) of the canonical JSON of a study's compute inputs: object keys sorted at every
