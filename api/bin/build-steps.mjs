@@ -39,24 +39,31 @@ export function buildWebIfStale({ force = false } = {}) {
   return true;
 }
 
-/** Bundles api/src/main.ts into dist/api/main.mjs; packages stay external (node_modules). */
+/**
+ * Bundles api/src/main.ts into dist/api/main.mjs, with two more entries beside it: worker.mjs (a
+ * sweep worker on its own) and sweep-worker.mjs (the sweep threads, which the server finds next
+ * to itself through import.meta.url). Packages stay external (node_modules).
+ */
 export function buildServer() {
-  const out = path.join(repoRoot, 'dist', 'api', 'main.mjs');
+  const outdir = path.join(repoRoot, 'dist', 'api');
   const result = spawnSync(
     bin('esbuild'),
     [
-      'api/src/main.ts',
+      'main=api/src/main.ts',
+      'worker=api/src/jobs/worker-main.ts',
+      'sweep-worker=api/src/jobs/sweep-thread.ts',
       '--bundle',
       '--platform=node',
       '--format=esm',
       '--target=node20',
       '--packages=external',
       '--sourcemap',
-      `--outfile=${out}`,
+      `--outdir=${outdir}`,
+      '--out-extension:.js=.mjs',
       '--log-level=warning',
     ],
     { cwd: repoRoot, stdio: 'inherit' },
   );
   if (result.status !== 0) throw new Error('bundling the server failed (see above)');
-  return out;
+  return path.join(outdir, 'main.mjs');
 }

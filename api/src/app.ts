@@ -9,6 +9,8 @@ import { authRoutes } from './auth/auth-routes';
 import { AuthService } from './auth/auth-service';
 import { warmDummyHash } from './auth/password-hasher';
 import { emailRateLimiter } from './auth/rate-limits';
+import { coilsRoutes } from './coils/coils-routes';
+import { CoilsService } from './coils/coils-service';
 import type { AppConfig } from './config/config';
 import type { Database } from './db/database';
 import { renderDocsPage } from './docs/docs-page';
@@ -19,6 +21,12 @@ import { healthRoutes } from './health/health-routes';
 import { mountRoutes, type AccessGuards, type RouteDefinition } from './http/route-definition';
 import { devMailRoutes } from './mail/dev-mail-routes';
 import type { CapturedMailStore } from './mail/fake-smtp-server';
+import { RevisionsService } from './studies/revisions-service';
+import { studiesRoutes } from './studies/studies-routes';
+import { StudiesService } from './studies/studies-service';
+import { sweepsRoutes } from './sweeps/sweeps-routes';
+import { SweepsRuntime } from './sweeps/sweeps-runtime';
+import { SweepsService } from './sweeps/sweeps-service';
 import { serveWeb } from './web/serve-web';
 import { InvitationsService } from './workspaces/invitations-service';
 import { loadMembership, requireRole } from './workspaces/membership-guards';
@@ -37,6 +45,8 @@ export interface AppDeps {
   logger?: Logger;
   /** Where the local fake SMTP server keeps mail; served at /api/v1/dev/mail outside production. */
   capturedMail?: CapturedMailStore;
+  /** Sweep queue, estimate thread and event hub; one that needs no clean-up is made if absent. */
+  sweeps?: SweepsRuntime;
 }
 
 export interface CreatedApp {
@@ -75,6 +85,12 @@ export function createApp(deps: AppDeps): CreatedApp {
   const auth = new AuthService(db, tokens, config.appUrl);
   const workspaces = new WorkspacesService(db);
   const invitations = new InvitationsService(db, config.appUrl);
+  const coils = new CoilsService(db);
+  const studies = new StudiesService(db);
+  const revisions = new RevisionsService(db);
+  const sweepsRuntime =
+    deps.sweeps ?? new SweepsRuntime({ databaseUrl: config.databaseUrl, logger });
+  const sweeps = new SweepsService(db, sweepsRuntime);
   warmDummyHash();
 
   // A private Passport instance: no global state shared between apps (tests build many).
@@ -114,6 +130,9 @@ export function createApp(deps: AppDeps): CreatedApp {
       forgotPasswordLimiter: emailRateLimiter(config.rateLimits.forgotPassword),
     }),
     ...workspacesRoutes(workspaces, invitations),
+    ...coilsRoutes(coils),
+    ...studiesRoutes(studies, revisions),
+    ...sweepsRoutes(sweeps, sweepsRuntime, { logger }),
     ...(config.nodeEnv === 'production' ? [] : devMailRoutes(deps.capturedMail)),
   ];
   const openApi = buildOpenApiDocument(routes, apiVersion);

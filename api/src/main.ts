@@ -5,9 +5,11 @@ import { createApp } from './app';
 import { ConfigError, parseConfig } from './config/config';
 import { createDatabase } from './db/database';
 import { migrate } from './db/migrate';
+import { SweepWorker } from './jobs/sweep-worker';
 import { startFakeSmtpServer, type FakeSmtpServer } from './mail/fake-smtp-server';
 import { createMailTransport } from './mail/mail-transport';
 import { OutboxSender } from './mail/outbox-sender';
+import { SweepsRuntime } from './sweeps/sweeps-runtime';
 
 async function main(): Promise<void> {
   const config = parseConfig(process.env);
@@ -40,7 +42,35 @@ async function main(): Promise<void> {
   const sender = new OutboxSender({ db: database.db, transport, from: config.mailFrom, logger });
   sender.start();
 
-  const { app } = createApp({ config, db: database.db, logger, capturedMail: smtpFake?.store });
+  // The queue's schema is created here even without a worker, so runs are sent as jobs at once.
+  const sweeps = new SweepsRuntime({
+    databaseUrl: config.databaseUrl,
+    logger,
+    supervise: config.sweeps.runWorker,
+  });
+  await sweeps.start();
+  const sweepWorker = config.sweeps.runWorker
+    ? await SweepWorker.start({
+        databaseUrl: config.databaseUrl,
+        queue: sweeps.queue,
+        threads: config.sweeps.workers,
+        logger,
+      })
+    : undefined;
+  if (sweepWorker) sweeps.onQueued = () => sweepWorker.wake();
+  console.log(
+    sweepWorker
+      ? `Sweep worker: ${config.sweeps.workers} thread(s) in this process`
+      : 'Sweep worker: off here (RUN_SWEEP_WORKER=0); run dist/api/worker.mjs elsewhere',
+  );
+
+  const { app } = createApp({
+    config,
+    db: database.db,
+    logger,
+    capturedMail: smtpFake?.store,
+    sweeps,
+  });
   const server = app.listen(config.port, config.host);
   await new Promise<void>((resolve, reject) => {
     server.once('listening', resolve);
@@ -55,10 +85,15 @@ async function main(): Promise<void> {
     if (stopping) return;
     stopping = true;
     logger.info({ signal }, 'shutting down');
+    // Open event streams would hold server.close() until their clients leave: end them first.
+    await sweeps.events.close();
     // Idle keep-alive sockets would hold server.close() open until they time out.
     server.closeIdleConnections();
     await new Promise<void>((resolve) => server.close(() => resolve()));
     await sender.stop();
+    // Running sweeps are handed back to the queue, to be computed again after the restart.
+    await sweepWorker?.stop();
+    await sweeps.close();
     transport.close();
     await smtpFake?.close();
     await database.close();

@@ -25,6 +25,11 @@ const environmentSchema = z.object({
   WEB_DIST: z.string().min(1).optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).optional(),
   LOAD_DEMO: flag,
+  // Sweep threads of this process. One by default: on a two-core machine the other core serves
+  // the web requests and PostgreSQL; raise it (or run more workers elsewhere) on bigger hosts.
+  SWEEP_WORKERS: z.coerce.number().int().min(1).max(64).default(1),
+  // 0 runs the web server without a sweep worker (workers then run elsewhere: dist/api/worker.mjs).
+  RUN_SWEEP_WORKER: flag.default(true),
 });
 
 export interface RateLimitConfig {
@@ -45,6 +50,8 @@ export interface AppConfig {
   webDist?: string;
   logLevel: string;
   loadDemo: boolean;
+  /** Sweep compute in this process: whether a worker runs here, and its threads. */
+  sweeps: { runWorker: boolean; workers: number };
   rateLimits: { signIn: RateLimitConfig; forgotPassword: RateLimitConfig };
 }
 
@@ -83,6 +90,7 @@ export function parseConfig(env: NodeJS.ProcessEnv): AppConfig {
     webDist: e.WEB_DIST,
     logLevel: e.LOG_LEVEL ?? (e.NODE_ENV === 'test' ? 'silent' : 'info'),
     loadDemo: e.LOAD_DEMO,
+    sweeps: { runWorker: e.RUN_SWEEP_WORKER, workers: e.SWEEP_WORKERS },
     rateLimits: {
       // Ten tries per quarter hour per address and e-mail slows guessing to ~1000 a day while a
       // person who mistypes a few times never notices (OWASP authentication cheat sheet spirit).

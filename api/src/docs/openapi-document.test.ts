@@ -26,6 +26,29 @@ const contractRoutes = [
   ['get', '/invitations/{token}'],
   ['post', '/invitations/{token}/accept'],
   ['get', '/workspaces/{workspaceId}/audit'],
+  // Coil library (issue 4).
+  ['get', '/workspaces/{workspaceId}/coils'],
+  ['post', '/workspaces/{workspaceId}/coils'],
+  ['get', '/workspaces/{workspaceId}/coils/{coilId}'],
+  ['put', '/workspaces/{workspaceId}/coils/{coilId}'],
+  ['post', '/workspaces/{workspaceId}/coils/{coilId}/duplicate'],
+  ['delete', '/workspaces/{workspaceId}/coils/{coilId}'],
+  // Studies and revisions (issue 4).
+  ['get', '/workspaces/{workspaceId}/studies'],
+  ['post', '/workspaces/{workspaceId}/studies'],
+  ['get', '/workspaces/{workspaceId}/studies/{studyId}'],
+  ['put', '/workspaces/{workspaceId}/studies/{studyId}'],
+  ['delete', '/workspaces/{workspaceId}/studies/{studyId}'],
+  ['post', '/workspaces/{workspaceId}/studies/{studyId}/revisions'],
+  ['get', '/workspaces/{workspaceId}/studies/{studyId}/revisions'],
+  ['get', '/workspaces/{workspaceId}/studies/{studyId}/revisions/{revisionId}'],
+  // Sweep runs (issue 4).
+  ['get', '/workspaces/{workspaceId}/studies/{studyId}/sweeps'],
+  ['post', '/workspaces/{workspaceId}/studies/{studyId}/sweeps'],
+  ['post', '/workspaces/{workspaceId}/studies/{studyId}/sweeps/estimate'],
+  ['get', '/workspaces/{workspaceId}/studies/{studyId}/sweeps/{runId}'],
+  ['post', '/workspaces/{workspaceId}/studies/{studyId}/sweeps/{runId}/cancel'],
+  ['get', '/workspaces/{workspaceId}/studies/{studyId}/sweeps/{runId}/events'],
   ['get', '/dev/mail'],
 ] as const;
 

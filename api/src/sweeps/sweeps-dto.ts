@@ -34,80 +34,116 @@ export type CreateSweepRequest = z.input<typeof createSweepRequest>;
 
 export const MAX_STORED_SWEEP_POSES = 250_000;
 
-export interface SweepEstimateResponse {
-  poses: number;
+const isoTime = z.iso.datetime({ offset: true });
+
+// Response shapes restate stored values without the request's limits (a limit tightened later
+// must not turn a stored run into a 500); the route layer parses every response through them.
+
+export const sweepEstimateResponse = z.object({
+  poses: z.number().int(),
   /** Measured on this server: preparing the pair once plus a timed sample of poses. */
-  prepareSeconds: number;
-  perPoseMicroseconds: number;
-  estimatedSeconds: number;
-}
+  prepareSeconds: z.number(),
+  perPoseMicroseconds: z.number(),
+  estimatedSeconds: z.number(),
+});
+export type SweepEstimateResponse = z.infer<typeof sweepEstimateResponse>;
+
+const point = z.object({ x: z.number(), y: z.number() });
 
 /** One gap's tolerance envelope (physics' toleranceEnvelope, positions in metres). */
-export interface SweepEnvelope {
-  z: number;
+export const sweepEnvelope = z.object({
+  z: z.number(),
   /** The k the envelope is drawn at (η_min is turned into k with the coils' Q at the frequency). */
-  thresholdK: number;
-  polygons: { x: number; y: number }[][][];
+  thresholdK: z.number(),
+  polygons: z.array(z.array(z.array(point))),
   /** m². */
-  area: number;
+  area: z.number(),
   /** Radius of the largest circle about the nominal point inside the envelope, m. */
-  chargeRadius: number;
-  chargeRadiusLimitedByMap: boolean;
-  worst: { x: number; y: number; value: number } | null;
-  nominal: { x: number; y: number; value: number | null; meets: boolean };
-}
+  chargeRadius: z.number(),
+  chargeRadiusLimitedByMap: z.boolean(),
+  worst: point.extend({ value: z.number() }).nullable(),
+  nominal: point.extend({ value: z.number().nullable(), meets: z.boolean() }),
+});
+export type SweepEnvelope = z.infer<typeof sweepEnvelope>;
+
+const numbers = z.array(z.number());
+const sweepAxesOut = z.object({
+  x: numbers,
+  y: numbers,
+  z: numbers,
+  tiltX: numbers,
+  tiltY: numbers,
+});
 
 /** A finished sweep's numbers. Arrays follow physics' grid order (x fastest, then y, z, tilts). */
-export interface SweepResultBody {
-  axes: SweepAxes;
-  count: number;
+export const sweepResultBody = z.object({
+  axes: sweepAxesOut,
+  count: z.number().int(),
   /** H, per pose. */
-  M: number[];
+  M: numbers,
   /** Coupling coefficient per pose. */
-  k: number[];
+  k: numbers,
   /** Maximum link efficiency per pose at the study frequency (coil losses only). */
-  etaMax: number[];
+  etaMax: numbers,
   /** Tx self-inductance, H; Rx self-inductance per pose (constant unless a Tx backing), H. */
-  L1: number;
-  L2: number[];
-  /** Coil resistances and Q at the frequency. */
-  R1: number;
-  R2: number;
-  Q1: number;
-  Q2: number;
+  L1: z.number(),
+  L2: numbers,
+  /** Coil resistances and Q at the frequency (Q2 of the Rx on its own). */
+  R1: z.number(),
+  R2: z.number(),
+  Q1: z.number(),
+  Q2: z.number(),
   /** Per gap of an xy-map or xy-stack; empty for gap and tilt sweeps. */
-  envelopes: SweepEnvelope[];
-  kMin: number;
-  kMax: number;
-}
+  envelopes: z.array(sweepEnvelope),
+  kMin: z.number(),
+  kMax: z.number(),
+});
+export type SweepResultBody = Omit<z.infer<typeof sweepResultBody>, 'axes'> & { axes: SweepAxes };
 
-export interface SweepRunResponse {
-  id: string;
-  studyId: string;
-  kind: SweepKind;
-  grid: SweepSpec;
-  status: SweepStatus;
-  pointsTotal: number;
-  pointsDone: number;
+const axisOut = z.union([
+  z.number(),
+  z.object({ from: z.number(), to: z.number(), steps: z.number().int() }),
+]);
+const gridOut = z.object({
+  x: axisOut.optional(),
+  y: axisOut.optional(),
+  z: axisOut,
+  tiltX: axisOut.optional(),
+  tiltY: axisOut.optional(),
+});
+
+export const sweepRunResponse = z.object({
+  id: uuid,
+  studyId: uuid,
+  kind: sweepKindSchema,
+  grid: gridOut,
+  status: z.enum(sweepStatuses),
+  pointsTotal: z.number().int(),
+  pointsDone: z.number().int(),
   /** 0 … 1. */
-  progressFraction: number;
-  inputsHash: string;
+  progressFraction: z.number(),
+  inputsHash: z.string(),
   /** False once the study's inputs or coils changed after the run was queued. */
-  current: boolean;
-  engineVersion: string;
-  queuedAt: string;
-  startedAt: string | null;
-  finishedAt: string | null;
-  computeTimeS: number | null;
-  error: string | null;
-  cancelRequested: boolean;
-  requestedBy: { userId: string; displayName: string } | null;
+  current: z.boolean(),
+  engineVersion: z.string(),
+  queuedAt: isoTime,
+  startedAt: isoTime.nullable(),
+  finishedAt: isoTime.nullable(),
+  computeTimeS: z.number().nullable(),
+  error: z.string().nullable(),
+  cancelRequested: z.boolean(),
+  requestedBy: z.object({ userId: uuid, displayName: z.string() }).nullable(),
   /** Only on GET of one run (and in revisions), only once succeeded. */
+  result: sweepResultBody.optional(),
+});
+export type SweepRunResponse = Omit<z.infer<typeof sweepRunResponse>, 'grid' | 'result'> & {
+  grid: SweepSpec;
   result?: SweepResultBody;
-}
+};
 
+/** Newest first, without result bodies. */
+export const listSweepRunsResponse = z.object({ items: z.array(sweepRunResponse) });
 export interface ListSweepRunsResponse {
-  /** Newest first, without result bodies. */
   items: SweepRunResponse[];
 }
 
@@ -136,7 +172,7 @@ export interface SweepProgressEvent {
 export interface FrozenSweepSpec {
   kind: SweepKind;
   grid: SweepSpec;
-  inputs: import('../studies/study-inputs-hash').StudyComputeInputs;
+  inputs: import('../studies/studies-dto').StudyComputeInputs;
   coilNames: { tx: string; rx: string };
   engineVersion: string;
   inputsHash: string;
