@@ -3,6 +3,7 @@ import type { Database } from '../api/src/db/database';
 import { hashPassword, verifyPassword } from '../api/src/auth/password-hasher';
 import type { Role } from '../api/src/workspaces/workspaces-dto';
 import { auditEvents, memberships, users, workspaces } from '../schema/src/index';
+import { loadDemoLibrary } from './load-demo-library';
 import { demoPassword, demoPeople, demoWorkspace } from './demo-workspace';
 
 export interface DemoSignIn {
@@ -15,8 +16,10 @@ export interface DemoSignIn {
 }
 
 /**
- * Loads the demo workspace. Idempotent: a second run adds nothing, and it never overwrites what
- * people changed since (passwords, names, roles). Returns the sign-ins to print.
+ * Loads the demo workspace, its coil library and the baseline study with stored sweeps and a
+ * revision (load-demo-library.ts). Idempotent: a second run adds nothing, and it never overwrites
+ * what people changed since (passwords, names, roles, coils, studies). Returns the sign-ins to
+ * print.
  */
 export async function loadDemo(db: Database): Promise<DemoSignIn[]> {
   const signIns: DemoSignIn[] = [];
@@ -88,6 +91,9 @@ export async function loadDemo(db: Database): Promise<DemoSignIn[]> {
       const sign = signIns.find((s) => s.email === person.email)!;
       if (member[0]) sign.role = member[0].role;
     }
+    // The editor, Oskar Brandt, built the library and ran the sweeps in the demo's story.
+    const editor = demoPeople.find((p) => p.role === 'editor')!;
+    await loadDemoLibrary(tx, { id: userIds.get(editor.email)!, displayName: editor.displayName });
   });
   return signIns;
 }
