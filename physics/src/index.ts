@@ -105,6 +105,11 @@ export { optimalLoad } from './link/optimal-load';
 export { inducedVoltage } from './link/induced-voltage';
 export { resonantVoltage } from './link/resonant-voltage';
 export { seriesCompensation } from './link/series-compensation';
+export {
+  compensationCapacitors,
+  type CompensationCapacitors,
+  type CompensationTopology,
+} from './link/compensation-capacitors';
 export { storedEnergy } from './link/stored-energy';
 export { timeConstant } from './link/time-constant';
 
