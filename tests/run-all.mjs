@@ -12,7 +12,10 @@ import { buildServer, buildWebIfStale } from '../api/bin/build-steps.mjs';
 
 const bin = (name) => path.join(repoRoot, 'node_modules', '.bin', name);
 const reportDir = path.join(repoRoot, '.couplet', 'test-reports');
-const clusterName = 'test';
+const clusterPort = Number(process.env.COUPLET_TEST_PG_PORT ?? 54339);
+// Named after the port (as tests/support/global-setup.ts does), so runs on two ports never share
+// a data folder.
+const clusterName = clusterPort === 54339 ? 'test' : `test-${clusterPort}`;
 const only = process.argv.slice(2); // e.g. `npm test -- vitest e2e`
 const wanted = (suite) => only.length === 0 || only.includes(suite);
 const results = [];
@@ -74,7 +77,7 @@ async function main() {
   destroyCluster(clusterName); // a throwaway cluster: every run starts from nothing
   const cluster = await startCluster({
     name: clusterName,
-    port: Number(process.env.COUPLET_TEST_PG_PORT ?? 54339),
+    port: clusterPort,
     database: 'couplet_test',
     throwaway: true,
   });

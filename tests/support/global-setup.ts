@@ -3,9 +3,13 @@
 // `npx vitest` directly gets the same throwaway cluster, started here and stopped afterwards.
 import { startCluster } from '../../api/dev/pg-cluster.mjs';
 
+const testPort = Number(process.env.COUPLET_TEST_PG_PORT ?? 54339);
+
+// The data folder is named after the port, so two runs on different ports never share (and stop)
+// one cluster.
 export const testCluster = {
-  name: 'test',
-  port: Number(process.env.COUPLET_TEST_PG_PORT ?? 54339),
+  name: testPort === 54339 ? 'test' : `test-${testPort}`,
+  port: testPort,
 };
 
 export default async function setup(): Promise<(() => void) | undefined> {

@@ -30,6 +30,44 @@ export type {
   WorkspaceResponse,
 } from '../../../api/src/workspaces/workspaces-dto';
 export type { ProblemResponse } from '../../../api/src/errors/problem-dto';
+export type {
+  CoilFiguresResponse,
+  CoilKind,
+  CoilResponse,
+  CreateCoilRequest,
+  DuplicateCoilRequest,
+  ListCoilsQuery,
+  ListCoilsResponse,
+  UpdateCoilRequest,
+} from '../../../api/src/coils/coils-dto';
+export type {
+  Compensation,
+  CreateRevisionRequest,
+  CreateStudyRequest,
+  ListRevisionsResponse,
+  ListStudiesResponse,
+  RevisionResponse,
+  RevisionSummaryResponse,
+  StudyCoil,
+  StudyPose,
+  StudyResponse,
+  StudySummaryResponse,
+  Threshold,
+  UpdateStudyRequest,
+} from '../../../api/src/studies/studies-dto';
+export type {
+  CreateSweepRequest,
+  ListSweepRunsResponse,
+  MAX_STORED_SWEEP_POSES,
+  SweepEnvelope,
+  SweepEstimateResponse,
+  SweepKind,
+  SweepProgressEvent,
+  SweepResultBody,
+  SweepRunResponse,
+  SweepStatus,
+} from '../../../api/src/sweeps/sweeps-dto';
+export type { SweepAxes, SweepSpec } from '../../../physics/src/index';
 
 /**
  * The roles in the order the pickers list them, most rights first. A value, so it cannot come

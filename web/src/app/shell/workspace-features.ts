@@ -20,7 +20,7 @@ export const workspaceFeatures: readonly WorkspaceFeature[] = [
     summary:
       'Planar and rectangular spirals, solenoids and custom paths with live inductance, ' +
       'resistance and Q at the operating frequency, drawn to scale.',
-    ready: false,
+    ready: true,
   },
   {
     key: 'studies',
@@ -30,7 +30,7 @@ export const workspaceFeatures: readonly WorkspaceFeature[] = [
     summary:
       'A Tx and Rx pair in 3D, pose controls, sweeps of gap, offset and tilt, coupling maps ' +
       'and the tolerance envelope.',
-    ready: false,
+    ready: true,
   },
   {
     key: 'compare',

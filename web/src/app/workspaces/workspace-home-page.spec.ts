@@ -75,9 +75,14 @@ describe('WorkspaceHomePage', () => {
     expect(page().querySelector('[data-testid=home-members]')?.getAttribute('href')).toBe(
       `/w/${workspaceId}/members`,
     );
+    const ready = [...page().querySelectorAll('a.tile.ready:not([data-testid=home-members])')];
+    expect(ready.map((a) => a.getAttribute('href'))).toEqual(
+      ['coils', 'studies'].map((path) => `/w/${workspaceId}/${path}`),
+    );
+    for (const tile of ready) expect(tile.textContent).not.toContain('later release');
     const later = [...page().querySelectorAll('a.tile:not(.ready)')];
     expect(later.map((a) => a.getAttribute('href'))).toEqual(
-      ['coils', 'studies', 'compare', 'review'].map((path) => `/w/${workspaceId}/${path}`),
+      ['compare', 'review'].map((path) => `/w/${workspaceId}/${path}`),
     );
     for (const tile of later) expect(tile.textContent).toContain('Coming in a later release');
   });

@@ -32,11 +32,15 @@ import { WorkspaceContext } from './workspace-context';
             <span class="go">Open <app-icon name="arrow-right" /></span>
           </a>
           @for (feature of features; track feature.key) {
-            <a class="tile" [routerLink]="feature.path">
+            <a class="tile" [class.ready]="feature.ready" [routerLink]="feature.path">
               <app-icon [name]="feature.icon" class="tile-icon" />
               <h2>{{ feature.label }}</h2>
               <p>{{ feature.summary }}</p>
-              <span class="later">Coming in a later release</span>
+              @if (feature.ready) {
+                <span class="go">Open <app-icon name="arrow-right" /></span>
+              } @else {
+                <span class="later">Coming in a later release</span>
+              }
             </a>
           }
         </div>

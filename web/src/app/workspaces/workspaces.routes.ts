@@ -35,15 +35,11 @@ export const workspaceRoutes: Routes = [
       },
       {
         path: 'coils',
-        title: 'Coil library · Couplet',
-        data: { feature: 'coils' },
-        loadComponent: () => import('../shell/coming-soon-page').then((m) => m.ComingSoonPage),
+        loadChildren: () => import('../coils/coils.routes').then((m) => m.coilRoutes),
       },
       {
         path: 'studies',
-        title: 'Studies · Couplet',
-        data: { feature: 'studies' },
-        loadComponent: () => import('../shell/coming-soon-page').then((m) => m.ComingSoonPage),
+        loadChildren: () => import('../studies/studies.routes').then((m) => m.studiesRoutes),
       },
       {
         path: 'compare',
