@@ -27,9 +27,11 @@ async function waitForHealth(url: string, child: ChildProcess): Promise<void> {
 }
 
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
-  const databaseUrl =
-    process.env.DATABASE_URL ??
-    (await startCluster({ ...testCluster, database: 'couplet_test', throwaway: true })).url;
+  // `npm test` passes DATABASE_URL; run directly, the browser tests start (and stop) their own.
+  const ownCluster = process.env.DATABASE_URL
+    ? undefined
+    : await startCluster({ ...testCluster, database: 'couplet_test', throwaway: true });
+  const databaseUrl = process.env.DATABASE_URL ?? ownCluster!.url;
   const baseUrl = `http://127.0.0.1:${e2ePort}`;
   server = spawn(
     process.execPath,
@@ -62,6 +64,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
       server.kill('SIGTERM');
       await exited;
     }
+    ownCluster?.stop();
   };
 }
 

@@ -6,8 +6,8 @@ import { Icon } from './icon';
   selector: 'app-safety-notes',
   imports: [Icon],
   template: `
-    <aside class="notes" aria-labelledby="safety-notes-title" data-testid="safety-notes">
-      <h2 id="safety-notes-title">
+    <aside class="caution-panel" aria-labelledby="safety-notes-title" data-testid="safety-notes">
+      <h2 class="caution-title" id="safety-notes-title">
         <app-icon name="shield" /> Before a result leaves this workspace
       </h2>
       <ul>
@@ -29,33 +29,6 @@ import { Icon } from './icon';
         Local codes and licensed practice take precedence over anything shown here.
       </p>
     </aside>
-  `,
-  styles: `
-    .notes {
-      padding: 20px 24px;
-      border-radius: var(--mat-sys-corner-large);
-      border-left: 4px solid var(--mat-sys-tertiary);
-      background: var(--mat-sys-surface-container);
-      color: var(--mat-sys-on-surface);
-    }
-    h2 {
-      display: flex;
-      align-items: center;
-      gap: 8px;
-      font: var(--mat-sys-title-small);
-      color: var(--mat-sys-tertiary);
-    }
-    ul {
-      margin: 12px 0;
-      padding-left: 20px;
-      display: grid;
-      gap: 6px;
-    }
-    .defer {
-      margin: 0;
-      font: var(--mat-sys-body-small);
-      color: var(--mat-sys-on-surface-variant);
-    }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })

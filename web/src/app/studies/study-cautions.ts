@@ -18,8 +18,14 @@ export const HIGH_TANK_VOLTAGE = 60;
   selector: 'app-study-cautions',
   imports: [Icon],
   template: `
-    <aside class="notes" aria-labelledby="study-cautions-title" data-testid="study-cautions">
-      <h3 id="study-cautions-title"><app-icon name="shield" /> Cautions for this study</h3>
+    <aside
+      class="caution-panel"
+      aria-labelledby="study-cautions-title"
+      data-testid="study-cautions"
+    >
+      <h3 class="caution-title" id="study-cautions-title">
+        <app-icon name="shield" /> Cautions for this study
+      </h3>
       <ul>
         <li [class.raised]="high()" data-testid="caution-voltage">
           @if (tank(); as v) {
@@ -60,34 +66,8 @@ export const HIGH_TANK_VOLTAGE = 60;
     </aside>
   `,
   styles: `
-    .notes {
-      padding: 16px 20px;
-      border-radius: var(--mat-sys-corner-large);
-      border-left: 4px solid var(--mat-sys-tertiary);
-      background: var(--mat-sys-surface-container);
-      color: var(--mat-sys-on-surface);
-    }
-    h3 {
-      display: flex;
-      align-items: center;
-      gap: 8px;
-      font: var(--mat-sys-title-small);
-      color: var(--mat-sys-tertiary);
-    }
-    ul {
-      margin: 10px 0;
-      padding-left: 20px;
-      display: grid;
-      gap: 6px;
-      font: var(--mat-sys-body-medium);
-    }
     .raised {
       color: var(--mat-sys-error);
-    }
-    .defer {
-      margin: 0;
-      font: var(--mat-sys-body-small);
-      color: var(--mat-sys-on-surface-variant);
     }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
