@@ -36,8 +36,11 @@ import type { LiveCoilFigures } from './live-link-messages';
       </tbody>
     </table>
     <p class="note">
-      At {{ frequency() }}, 20 °C copper, skin effect only. L of the Tx includes its ferrite
-      backing; L of the Rx is the coil alone.
+      At {{ frequency() }}, 20 °C copper, skin effect only.
+      @if (txBacked()) {
+        L of the Tx includes its ferrite backing;
+      }
+      L of the Rx is the coil alone.
     </p>
   `,
   styles: `
@@ -84,6 +87,7 @@ export class CoilFiguresTable {
   readonly rx = input<LiveCoilFigures | null>(null);
   readonly frequencyHz = input.required<number>();
 
+  protected readonly txBacked = computed(() => this.txCoil().spec.backing !== undefined);
   protected readonly frequency = computed(() =>
     formatQuantity(this.frequencyHz(), 'Hz', { digits: 4, trim: true }),
   );
