@@ -78,6 +78,7 @@ async function main() {
   const cluster = await startCluster({
     name: clusterName,
     port: clusterPort,
+    portVariable: 'COUPLET_TEST_PG_PORT',
     database: 'couplet_test',
     throwaway: true,
   });

@@ -7,6 +7,8 @@ export function startCluster(options: {
   port: number;
   database: string;
   throwaway?: boolean;
+  /** The environment variable that moves this cluster's port, named when the port is taken. */
+  portVariable?: string;
 }): Promise<{ url: string; dataDir: string; stop: () => void }>;
 export function stopCluster(name: string): void;
 export function destroyCluster(name: string): void;

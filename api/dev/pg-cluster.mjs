@@ -105,7 +105,13 @@ function isRunning(bin, dataDir) {
  * @param {{name: string, port: number, database: string, throwaway?: boolean}} options
  *   throwaway: fsync and synchronous_commit off, for test clusters only (never for `npm start`).
  */
-export async function startCluster({ name, port, database, throwaway = false }) {
+export async function startCluster({
+  name,
+  port,
+  database,
+  throwaway = false,
+  portVariable = 'COUPLET_PG_PORT',
+}) {
   const bin = ensurePostgresInstalled();
   const root = clusterDir(name);
   const dataDir = path.join(root, 'data');
@@ -141,7 +147,7 @@ export async function startCluster({ name, port, database, throwaway = false }) 
     if (await portInUse(port)) {
       throw new Error(
         `port ${port} on 127.0.0.1 is taken by another program; stop it or set ` +
-          `COUPLET_PG_PORT to a free port`,
+          `${portVariable} to a free port`,
       );
     }
     const settings = [

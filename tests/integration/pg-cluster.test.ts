@@ -41,8 +41,10 @@ describe('project-local PostgreSQL cluster', () => {
     const squatter = net.createServer();
     await new Promise<void>((resolve) => squatter.listen(port, '127.0.0.1', resolve));
     try {
-      await expect(startCluster({ name, port, database: 'keep' })).rejects.toThrow(
-        new RegExp(`port ${port} on 127.0.0.1 is taken`),
+      await expect(
+        startCluster({ name, port, database: 'keep', portVariable: 'COUPLET_IT_PG_PORT' }),
+      ).rejects.toThrow(
+        new RegExp(`port ${port} on 127.0.0.1 is taken.*set COUPLET_IT_PG_PORT to a free port`),
       );
     } finally {
       await new Promise((resolve) => squatter.close(resolve));

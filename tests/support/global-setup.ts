@@ -10,6 +10,7 @@ const testPort = Number(process.env.COUPLET_TEST_PG_PORT ?? 54339);
 export const testCluster = {
   name: testPort === 54339 ? 'test' : `test-${testPort}`,
   port: testPort,
+  portVariable: 'COUPLET_TEST_PG_PORT',
 };
 
 export default async function setup(): Promise<(() => void) | undefined> {
