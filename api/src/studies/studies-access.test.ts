@@ -4,8 +4,13 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditEvents, studies, studyRevisions } from '../../../schema/src/index';
 import { bearer, createTestApp, type TestApp, type TestUser } from '../testing/test-app';
 import { workspaceWithAllRoles, type WorkspaceFixture } from '../testing/workspace-fixture';
-import { roleAtLeast } from '../workspaces/role-rank';
-import type { Role } from '../workspaces/workspaces-dto';
+import {
+  callAs,
+  expectedStatus,
+  matrixCells,
+  refusalCodes,
+  type RouteCase,
+} from '../testing/role-matrix';
 import { insertCoil, padRx, padTx, studyBody } from './study-fixture';
 
 // Every study and revision route × every role × a member of another workspace × anonymous.
@@ -29,24 +34,6 @@ afterAll(async () => {
 });
 
 const ws = () => `/api/v1/workspaces/${f.workspaceId}/studies`;
-
-interface Call {
-  method: 'get' | 'post' | 'put' | 'delete';
-  path: string;
-  body?: object;
-}
-
-type Caller = Role | 'outsider' | 'anonymous';
-
-interface RouteCase {
-  name: string;
-  minRole: Role;
-  success: number;
-  writes: boolean;
-  prepare(): Promise<Call>;
-  /** A member's answer other than success or 403 (an editor deleting reviewed work). */
-  memberOverride?: Partial<Record<Role, number>>;
-}
 
 async function freshStudy(): Promise<{ id: string; name: string }> {
   const res = await request(t.app)
@@ -156,23 +143,6 @@ const routes: RouteCase[] = [
   },
 ];
 
-const callers: Caller[] = ['owner', 'editor', 'reviewer', 'viewer', 'outsider', 'anonymous'];
-
-function tokenOf(caller: Caller): string | undefined {
-  if (caller === 'anonymous') return undefined;
-  if (caller === 'outsider') return outsider.accessToken;
-  if (caller === 'owner') return f.owner.accessToken;
-  return f.members[caller].accessToken;
-}
-
-function expected(route: RouteCase, caller: Caller): number {
-  if (caller === 'anonymous') return 401;
-  if (caller === 'outsider') return 404;
-  const override = route.memberOverride?.[caller];
-  if (override !== undefined) return override;
-  return roleAtLeast(caller, route.minRole) ? route.success : 403;
-}
-
 /** What a refused call must leave untouched: the studies, their revisions and the audit log. */
 async function snapshot() {
   const db = t.database.db;
@@ -196,29 +166,17 @@ async function snapshot() {
   return { rows, revisions, audit: audit!.n };
 }
 
-const cells = routes.flatMap((route) =>
-  callers.map((caller) => [route.name, caller, route] as const),
-);
-
-const codes: Record<number, string> = {
-  401: 'unauthenticated',
-  403: 'forbidden',
-  404: 'not_found',
-  409: 'conflict',
-};
+const cells = matrixCells(routes);
 
 describe('study access matrix', () => {
   it.each(cells)('%s as %s', async (_name, caller, route) => {
     const call = await route.prepare();
     const before = await snapshot();
-    let req = request(t.app)[call.method](call.path);
-    const token = tokenOf(caller);
-    if (token) req = req.set('Authorization', `Bearer ${token}`);
-    const res = call.body ? await req.send(call.body) : await req;
-    const want = expected(route, caller);
+    const res = await callAs(t.app, f, outsider, caller, call);
+    const want = expectedStatus(route, caller);
     expect(res.status, `${route.name} as ${caller}: ${res.text}`).toBe(want);
     if (want >= 400) {
-      expect(res.body.code).toBe(codes[want]);
+      expect(res.body.code).toBe(refusalCodes[want]);
       expect(await snapshot()).toEqual(before);
     } else if (route.writes) {
       expect(await snapshot()).not.toEqual(before);

@@ -15,8 +15,13 @@ import {
   workspaceWithAllRoles,
   type WorkspaceFixture,
 } from '../testing/workspace-fixture';
-import { roleAtLeast } from './role-rank';
-import type { Role } from './workspaces-dto';
+import {
+  callAs,
+  expectedStatus,
+  matrixCells,
+  refusalCodes,
+  type RouteCase,
+} from '../testing/role-matrix';
 
 // Every workspace route × every role × a member of another workspace × anonymous. Each request
 // gets fresh targets, so the outcome of one cell never depends on another.
@@ -36,20 +41,6 @@ beforeAll(async () => {
 afterAll(async () => {
   await t.close();
 });
-
-interface Call {
-  method: 'get' | 'post' | 'patch' | 'delete';
-  path: string;
-  body?: object;
-}
-
-interface RouteCase {
-  name: string;
-  minRole: Role;
-  success: number;
-  writes: boolean;
-  prepare(): Promise<Call>;
-}
 
 const ws = () => `/api/v1/workspaces/${f.workspaceId}`;
 
@@ -151,40 +142,17 @@ const routes: RouteCase[] = [
   },
 ];
 
-type Caller = Role | 'outsider' | 'anonymous';
-const callers: Caller[] = ['owner', 'editor', 'reviewer', 'viewer', 'outsider', 'anonymous'];
-
-function tokenOf(caller: Caller): string | undefined {
-  if (caller === 'anonymous') return undefined;
-  if (caller === 'outsider') return outsider.accessToken;
-  if (caller === 'owner') return f.owner.accessToken;
-  return f.members[caller].accessToken;
-}
-
-function expected(route: RouteCase, caller: Caller): number {
-  if (caller === 'anonymous') return 401;
-  if (caller === 'outsider') return 404;
-  return roleAtLeast(caller, route.minRole) ? route.success : 403;
-}
-
-const cells = routes.flatMap((route) =>
-  callers.map((caller) => [route.name, caller, route] as const),
-);
+const cells = matrixCells(routes);
 
 describe('access matrix', () => {
   it.each(cells)('%s as %s', async (_name, caller, route) => {
     const call = await route.prepare();
     const before = await workspaceSnapshot(t.database.db, f.workspaceId);
-    let req = request(t.app)[call.method](call.path);
-    const token = tokenOf(caller);
-    if (token) req = req.set('Authorization', `Bearer ${token}`);
-    const res = call.body ? await req.send(call.body) : await req;
-    const want = expected(route, caller);
+    const res = await callAs(t.app, f, outsider, caller, call);
+    const want = expectedStatus(route, caller);
     expect(res.status, `${route.name} as ${caller}: ${res.text}`).toBe(want);
     if (want >= 400) {
-      expect(res.body.code).toBe(
-        { 401: 'unauthenticated', 403: 'forbidden', 404: 'not_found' }[want],
-      );
+      expect(res.body.code).toBe(refusalCodes[want]);
       // Nothing about the workspace leaks to those who may not see it, and nothing is written.
       expect(res.text).not.toContain(f.name);
       expect(await workspaceSnapshot(t.database.db, f.workspaceId)).toEqual(before);
